@@ -1,0 +1,202 @@
+package org.sectio.modes;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.sectio.geometry.CrossSection;
+import org.sectio.io.MatrixMarketWriter;
+import org.sectio.mesh.CutCells;
+import org.sectio.mesh.TensorGrid;
+import org.sectio.operator.LatticePencil;
+
+/**
+ * The one entry point for a solve, used by the command line, batch work and the viewer alike.
+ *
+ * <p>A solve is: place a grid over the cross-section → cut it by the walls → for each family assemble
+ * the pencil, factor it shifted, run shift-invert Lanczos → put the eigenvectors back on the grid.
+ * With an error estimate the same is done on a grid with half as many cells across; both schemes
+ * converge at second order, so kc(h) − kc(2h) ≈ 3 (kc(h) − kc), and the estimate reported is
+ * 2|kc(h) − kc(2h)| / 3: the Richardson error of the fine value with a safety factor of 2, because cut
+ * cells make the error of one grid fluctuate about its h² trend.
+ */
+public final class ModeSolver {
+
+    /** Speed of light in vacuum, m/s (exact, SI 2019). */
+    public static final double SPEED_OF_LIGHT = 299_792_458.0;
+
+    private static final int PILOT_CELLS = 48;
+
+    private ModeSolver() {
+    }
+
+    /**
+     * Finds the lowest modes of a cross-section on a grid fitted to its bounding box.
+     *
+     * @param section the cross-section (metres)
+     * @param settings modes, families, grid or target accuracy, error estimate, threads
+     * @param progress told of each stage
+     * @return the {@code settings.modeCount()} lowest modes over the chosen families, lowest cutoff first
+     * @throws SolveException when the problem cannot be solved as asked (with a message for the user)
+     */
+    public static ModeSet solve(CrossSection section, SolveSettings settings, SolveProgress progress) {
+        if (!Double.isNaN(settings.targetRelativeError())) {
+            return solve(section, settings.withCellsAcross(cellsForTarget(section, settings, progress)), progress);
+        }
+        return solveOnGrid(section, TensorGrid.fitted(section.bounds(), settings.cellsAcross()), settings, progress);
+    }
+
+    /**
+     * Finds the lowest modes on a given grid (the error estimate uses a grid with every second line).
+     *
+     * @throws SolveException when the problem cannot be solved as asked
+     * @throws IllegalArgumentException if the grid does not cover the cross-section
+     */
+    public static ModeSet solveOnGrid(CrossSection section, TensorGrid grid, SolveSettings settings,
+                                      SolveProgress progress) {
+        long start = System.nanoTime();
+        boolean estimate = settings.estimateError();
+        double fineShare = estimate ? 0.8 : 1.0;
+        Map<ModeFamily, FamilySolver.Result> fine = solveFamilies(section, grid, settings, progress, 0.0, fineShare);
+        Map<ModeFamily, FamilySolver.Result> coarse = null;
+        if (estimate) {
+            TensorGrid half = everySecondLine(grid);
+            try {
+                coarse = half == null ? null : solveFamilies(section, half, settings, progress, fineShare, 1.0);
+            } catch (SolveException tooCoarse) {
+                coarse = null; // the estimate is then reported as unknown (NaN)
+            }
+        }
+        List<Mode> modes = new ArrayList<>();
+        double assembly = 0;
+        double factor = 0;
+        double eigen = 0;
+        for (FamilySolver.Result r : fine.values()) {
+            assembly += r.assemblySeconds();
+            factor += r.factorSeconds();
+            eigen += r.eigenSeconds();
+            for (int k = 0; k < r.cutoffWavenumbers().length; k++) {
+                double kc = r.cutoffWavenumbers()[k];
+                double err = Double.NaN;
+                if (coarse != null) {
+                    FamilySolver.Result c = coarse.get(r.family());
+                    if (k < c.cutoffWavenumbers().length) {
+                        err = 2.0 * Math.abs(kc - c.cutoffWavenumbers()[k]) / (3.0 * kc);
+                    }
+                }
+                modes.add(new Mode(r.family(), k + 1, kc, kc * SPEED_OF_LIGHT / (2 * Math.PI), r.residuals()[k], err,
+                        r.fields()[k]));
+            }
+        }
+        if (coarse != null) {
+            for (FamilySolver.Result r : coarse.values()) {
+                assembly += r.assemblySeconds();
+                factor += r.factorSeconds();
+                eigen += r.eigenSeconds();
+            }
+        }
+        modes.sort(Comparator.comparingDouble(Mode::cutoffWavenumber));
+        List<Mode> lowest = modes.subList(0, Math.min(settings.modeCount(), modes.size()));
+        var te = fine.get(ModeFamily.TE);
+        var tm = fine.get(ModeFamily.TM);
+        GridSummary summary = new GridSummary(grid.cellsX(), grid.cellsY(), grid.x(1) - grid.x(0), grid.y(1) - grid.y(0),
+                te == null ? 0 : te.unknowns(), tm == null ? 0 : tm.unknowns());
+        progress.report("done", 1.0);
+        return new ModeSet(section.name(), lowest, summary,
+                new SolveTiming(assembly, factor, eigen, (System.nanoTime() - start) * 1e-9));
+    }
+
+    private static Map<ModeFamily, FamilySolver.Result> solveFamilies(CrossSection section, TensorGrid grid,
+            SolveSettings settings, SolveProgress progress, double from, double to) {
+        progress.report(String.format(Locale.ROOT, "cutting a %d × %d grid", grid.cellsX(), grid.cellsY()), from);
+        CutCells cells = CutCells.of(section, grid);
+        Map<ModeFamily, FamilySolver.Result> results = new EnumMap<>(ModeFamily.class);
+        List<ModeFamily> families = settings.families().stream().sorted().toList();
+        double share = (to - from) / families.size();
+        for (int f = 0; f < families.size(); f++) {
+            ModeFamily family = families.get(f);
+            results.put(family, FamilySolver.solve(family, cells, settings.modeCount(), settings.threads(), progress,
+                    from + f * share, from + (f + 1) * share));
+        }
+        return results;
+    }
+
+    /** The grid made of every second line of {@code grid}, or null if that would be too coarse. */
+    static TensorGrid everySecondLine(TensorGrid grid) {
+        if (Math.min(grid.cellsX(), grid.cellsY()) < 8) {
+            return null;
+        }
+        return new TensorGrid(everySecond(grid.xLines()), everySecond(grid.yLines()));
+    }
+
+    private static double[] everySecond(double[] lines) {
+        int cells = lines.length - 1;
+        int coarseCells = (cells + 1) / 2;
+        double[] out = new double[coarseCells + 1];
+        for (int k = 0; k < coarseCells; k++) {
+            out[k] = lines[2 * k];
+        }
+        out[coarseCells] = lines[cells]; // with an odd count the last coarse cell keeps the fine width
+        return out;
+    }
+
+    /**
+     * Picks the cells across that meet the target error: a pilot solve gives the error at the pilot grid,
+     * and second-order convergence scales it as (pilot / cells)².
+     */
+    private static int cellsForTarget(CrossSection section, SolveSettings settings, SolveProgress progress) {
+        SolveSettings pilot = new SolveSettings(settings.modeCount(), settings.families(), PILOT_CELLS, Double.NaN,
+                true, settings.threads());
+        ModeSet first = solveOnGrid(section, TensorGrid.fitted(section.bounds(), PILOT_CELLS), pilot,
+                (stage, f) -> progress.report("choosing the grid: " + stage, 0.0));
+        double worst = first.modes().stream().mapToDouble(Mode::relativeErrorEstimate).max().orElse(Double.NaN);
+        if (!(worst > 0)) {
+            return PILOT_CELLS;
+        }
+        double cells = PILOT_CELLS * Math.sqrt(worst / settings.targetRelativeError()) * 1.15;
+        if (cells > SolveSettings.MAX_CELLS) {
+            throw new SolveException(String.format(Locale.ROOT, "an accuracy of %.2g needs about %.0f cells across,"
+                    + " more than the limit of %d; ask for a looser accuracy or fewer modes",
+                    settings.targetRelativeError(), cells, SolveSettings.MAX_CELLS));
+        }
+        return Math.max(PILOT_CELLS, (int) Math.ceil(cells));
+    }
+
+    /**
+     * Writes the assembled pencils (A and diagonal M for each chosen family) in Matrix Market format
+     * into {@code directory}, as {@code te-stiffness.mtx}, {@code te-mass.mtx}, {@code tm-stiffness.mtx},
+     * {@code tm-mass.mtx}; the directory is created if missing.
+     *
+     * @return the files written
+     * @throws IOException if a file cannot be written
+     */
+    public static List<Path> exportPencils(CrossSection section, SolveSettings settings, Path directory)
+            throws IOException {
+        Files.createDirectories(directory);
+        CutCells cells = CutCells.of(section, TensorGrid.fitted(section.bounds(), settings.cellsAcross()));
+        List<Path> written = new ArrayList<>();
+        for (ModeFamily family : settings.families().stream().sorted().toList()) {
+            LatticePencil pencil = FamilySolver.pencil(family, cells);
+            String prefix = family.name().toLowerCase(Locale.ROOT);
+            Path a = directory.resolve(prefix + "-stiffness.mtx");
+            Path m = directory.resolve(prefix + "-mass.mtx");
+            String where = "\ncross-section: " + section.name() + "\ngrid: " + settings.cellsAcross() + " cells across";
+            try {
+                MatrixMarketWriter.writeSymmetric(a, pencil.stiffness(), "Sectio " + family
+                        + " stiffness matrix A of the pencil A x = lambda M x, lambda = kc^2 in rad^2/m^2" + where);
+                MatrixMarketWriter.writeDiagonal(m, pencil.mass(), "Sectio " + family
+                        + " mass matrix M (diagonal, m^2) of the pencil A x = lambda M x" + where);
+            } catch (java.io.UncheckedIOException e) {
+                throw e.getCause();
+            }
+            written.add(a);
+            written.add(m);
+        }
+        return written;
+    }
+}
