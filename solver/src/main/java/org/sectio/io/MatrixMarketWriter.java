@@ -111,11 +111,20 @@ public final class MatrixMarketWriter {
         out.newLine();
         for (String line : description.split("\\R", -1)) {
             out.write("% ");
-            out.write(line);
+            out.write(asciiComment(line));
             out.newLine();
         }
         out.write(n + " " + n + " " + entries);
         out.newLine();
+    }
+
+    /** Matrix Market files are ASCII: the few non-ASCII signs of our names become ASCII, others '?'. */
+    static String asciiComment(String text) {
+        StringBuilder b = new StringBuilder(text.length());
+        for (char ch : text.replace("×", "x").replace("°", " deg").replace("…", "...").toCharArray()) {
+            b.append(ch < 128 ? ch : '?');
+        }
+        return b.toString();
     }
 
     private static void writeEntry(BufferedWriter out, int row, int column, double value) throws IOException {

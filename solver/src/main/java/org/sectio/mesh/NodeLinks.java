@@ -54,8 +54,8 @@ public final class NodeLinks {
                 }
                 int node = j * nx + i;
                 inside[node] = p % 2 == 1;
-                fraction[4 * node + LEFT] = p > 0 ? linkFraction(xs[i] - c[p - 1], step(xs, i, -1)) : 1.0;
-                fraction[4 * node + RIGHT] = p < c.length ? linkFraction(c[p] - xs[i], step(xs, i, +1)) : 1.0;
+                fraction[4 * node + LEFT] = p > 0 ? linkFraction(xs[i] - c[p - 1], grid.xStep(i, -1)) : 1.0;
+                fraction[4 * node + RIGHT] = p < c.length ? linkFraction(c[p] - xs[i], grid.xStep(i, +1)) : 1.0;
             }
         }
         for (int i = 0; i < nx; i++) {
@@ -66,8 +66,8 @@ public final class NodeLinks {
                     p++;
                 }
                 int node = j * nx + i;
-                fraction[4 * node + DOWN] = p > 0 ? linkFraction(ys[j] - c[p - 1], step(ys, j, -1)) : 1.0;
-                fraction[4 * node + UP] = p < c.length ? linkFraction(c[p] - ys[j], step(ys, j, +1)) : 1.0;
+                fraction[4 * node + DOWN] = p > 0 ? linkFraction(ys[j] - c[p - 1], grid.yStep(j, -1)) : 1.0;
+                fraction[4 * node + UP] = p < c.length ? linkFraction(c[p] - ys[j], grid.yStep(j, +1)) : 1.0;
             }
         }
         for (int j = 0; j < ny; j++) {
@@ -101,14 +101,6 @@ public final class NodeLinks {
                 Math.min(fraction[4 * node + 2], fraction[4 * node + 3]));
     }
 
-    /** The length of the link from line k towards k + direction (the neighbouring link's at the grid edge). */
-    private static double step(double[] lines, int k, int direction) {
-        int to = k + direction;
-        if (to < 0 || to >= lines.length) {
-            return Math.abs(lines[k] - lines[k - direction]);
-        }
-        return Math.abs(lines[to] - lines[k]);
-    }
 
     /** Distance to the wall over link length, or 1 if the wall is beyond the link. */
     private static double linkFraction(double distance, double linkLength) {

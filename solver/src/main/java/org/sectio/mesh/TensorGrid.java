@@ -94,6 +94,27 @@ public record TensorGrid(double[] xLines, double[] yLines) {
         return yLines[j];
     }
 
+    /**
+     * The length of the grid link from x-line i towards i + direction (±1); at the grid's edge, the
+     * length of the link on the other side.
+     */
+    public double xStep(int i, int direction) {
+        return step(xLines, i, direction);
+    }
+
+    /** The length of the grid link from y-line j towards j + direction (±1); see {@link #xStep}. */
+    public double yStep(int j, int direction) {
+        return step(yLines, j, direction);
+    }
+
+    private static double step(double[] lines, int k, int direction) {
+        int to = k + direction;
+        if (to < 0 || to >= lines.length) {
+            return Math.abs(lines[k] - lines[k - direction]);
+        }
+        return Math.abs(lines[to] - lines[k]);
+    }
+
     /** @return the largest cell side, m */
     public double largestStep() {
         double h = 0;

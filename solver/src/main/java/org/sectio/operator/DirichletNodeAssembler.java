@@ -35,10 +35,10 @@ public final class DirichletNodeAssembler {
             int j = node / columns;
             column[k] = i;
             row[k] = j;
-            double hLeft = step(xs, i, -1);
-            double hRight = step(xs, i, +1);
-            double hDown = step(ys, j, -1);
-            double hUp = step(ys, j, +1);
+            double hLeft = grid.xStep(i, -1);
+            double hRight = grid.xStep(i, +1);
+            double hDown = grid.yStep(j, -1);
+            double hUp = grid.yStep(j, +1);
             double dualWidth = 0.5 * (hLeft + hRight);
             double dualHeight = 0.5 * (hDown + hUp);
             mass[k] = dualWidth * dualHeight;
@@ -78,11 +78,4 @@ public final class DirichletNodeAssembler {
         return returnDiagonal ? weightOf(neighbour, dualLength, linkLength, theta) : 0.0;
     }
 
-    private static double step(double[] lines, int k, int direction) {
-        int to = k + direction;
-        if (to < 0 || to >= lines.length) {
-            return Math.abs(lines[k] - lines[k - direction]);
-        }
-        return Math.abs(lines[to] - lines[k]);
-    }
 }

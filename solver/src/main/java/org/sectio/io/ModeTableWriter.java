@@ -1,0 +1,168 @@
+package org.sectio.io;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import org.sectio.modes.GridSummary;
+import org.sectio.modes.Mode;
+import org.sectio.modes.ModeSet;
+import org.sectio.modes.SolveTiming;
+
+/**
+ * Writes the modes of a solve as a table in one of three {@link TableFormat}s, modes ordered by cutoff,
+ * lowest first. Values are SI (Hz, rad/m, m, s) in CSV and JSON; the readable table shows GHz and mm.
+ *
+ * <p>CSV columns: {@code number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,
+ * relative_error_estimate,residual}, with an empty field for an estimate not made. JSON: an object
+ * with {@code section}, {@code grid} {cells_x, cells_y, cell_width_m, cell_height_m, unknowns_te,
+ * unknowns_tm}, {@code timing} {assembly_s, factor_s, eigen_s, total_s} and {@code modes}, each mode
+ * with {@code number, family, index, label, cutoff_wavenumber_per_m, cutoff_frequency_hz, residual,
+ * relative_error_estimate} (null when not estimated). Numbers in CSV and JSON print the shortest
+ * decimal that reads back to the same double.
+ */
+public final class ModeTableWriter {
+
+    /** The CSV header row. */
+    public static final String CSV_HEADER = "number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,"
+            + "relative_error_estimate,residual";
+
+    private static final String TABLE_HEADER = String.format(Locale.ROOT, "%3s  %-6s  %5s  %14s  %14s  %10s  %9s",
+            "#", "family", "index", "cutoff (GHz)", "kc (rad/m)", "rel. error", "residual");
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ModeTableWriter() {
+    }
+
+    /**
+     * @param modes the result of a solve
+     * @param format how to lay it out
+     * @return the whole table, lines ending in {@code \n}
+     */
+    public static String format(ModeSet modes, TableFormat format) {
+        return switch (format) {
+            case TABLE -> readable(modes);
+            case CSV -> csv(modes);
+            case JSON -> json(modes);
+        };
+    }
+
+    /**
+     * @param modes the result of a solve
+     * @param format how to lay it out
+     * @param out where to write (UTF-8 text); flushed, not closed
+     * @throws IOException if writing fails
+     */
+    public static void write(ModeSet modes, TableFormat format, Writer out) throws IOException {
+        out.write(format(modes, format));
+        out.flush();
+    }
+
+    /**
+     * Writes the table to a file atomically (see {@link AtomicFile}).
+     *
+     * @param file the file to create or replace; its folder must exist
+     * @throws IOException if the file cannot be written; an earlier file of that name is then kept
+     */
+    public static void write(ModeSet modes, TableFormat format, Path file) throws IOException {
+        String text = format(modes, format);
+        AtomicFile.write(file, out -> {
+            Writer writer = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            writer.write(text);
+            writer.flush();
+        });
+    }
+
+    private static List<Mode> byCutoff(ModeSet modes) {
+        return modes.modes().stream().sorted(Comparator.comparingDouble(Mode::cutoffFrequencyHz)).toList();
+    }
+
+    private static String readable(ModeSet modes) {
+        GridSummary grid = modes.grid();
+        StringBuilder text = new StringBuilder();
+        text.append("Modes of ").append(modes.sectionName()).append('\n');
+        text.append(String.format(Locale.ROOT, "grid %d × %d cells of %.5g × %.5g mm; unknowns TE %d, TM %d%n",
+                grid.cellsX(), grid.cellsY(), grid.cellWidth() * 1e3, grid.cellHeight() * 1e3,
+                grid.unknownsTE(), grid.unknownsTM()));
+        text.append(TABLE_HEADER).append('\n');
+        int number = 1;
+        for (Mode mode : byCutoff(modes)) {
+            text.append(String.format(Locale.ROOT, "%3d  %-6s  %5d  %14.7f  %14.6f  %10s  %9s%n", number++,
+                    mode.family(), mode.index(), mode.cutoffFrequencyHz() * 1e-9, mode.cutoffWavenumber(),
+                    Double.isNaN(mode.relativeErrorEstimate()) ? "-"
+                            : String.format(Locale.ROOT, "%.1e", mode.relativeErrorEstimate()),
+                    String.format(Locale.ROOT, "%.1e", mode.relativeResidual())));
+        }
+        SolveTiming time = modes.timing();
+        text.append(String.format(Locale.ROOT,
+                "time %.3f s: assembly %.3f s, factorization %.3f s, eigenvalues %.3f s%n",
+                time.totalSeconds(), time.assemblySeconds(), time.factorSeconds(), time.eigenSeconds()));
+        return text.toString().replace("\r\n", "\n");
+    }
+
+    private static String csv(ModeSet modes) {
+        StringBuilder text = new StringBuilder(CSV_HEADER).append('\n');
+        int number = 1;
+        for (Mode mode : byCutoff(modes)) {
+            text.append(number++).append(',').append(mode.family()).append(',').append(mode.index()).append(',')
+                    .append(mode.cutoffFrequencyHz()).append(',').append(mode.cutoffWavenumber()).append(',')
+                    .append(Double.isNaN(mode.relativeErrorEstimate()) ? "" : Double.toString(mode.relativeErrorEstimate()))
+                    .append(',').append(mode.relativeResidual()).append('\n');
+        }
+        return text.toString();
+    }
+
+    private static String json(ModeSet modes) {
+        ObjectNode root = JSON.createObjectNode();
+        root.put("section", modes.sectionName());
+        GridSummary grid = modes.grid();
+        ObjectNode gridNode = root.putObject("grid");
+        gridNode.put("cells_x", grid.cellsX());
+        gridNode.put("cells_y", grid.cellsY());
+        putNumber(gridNode, "cell_width_m", grid.cellWidth());
+        putNumber(gridNode, "cell_height_m", grid.cellHeight());
+        gridNode.put("unknowns_te", grid.unknownsTE());
+        gridNode.put("unknowns_tm", grid.unknownsTM());
+        SolveTiming time = modes.timing();
+        ObjectNode timing = root.putObject("timing");
+        putNumber(timing, "assembly_s", time.assemblySeconds());
+        putNumber(timing, "factor_s", time.factorSeconds());
+        putNumber(timing, "eigen_s", time.eigenSeconds());
+        putNumber(timing, "total_s", time.totalSeconds());
+        ArrayNode list = root.putArray("modes");
+        int number = 1;
+        for (Mode mode : byCutoff(modes)) {
+            ObjectNode entry = list.addObject();
+            entry.put("number", number++);
+            entry.put("family", mode.family().name());
+            entry.put("index", mode.index());
+            entry.put("label", mode.label());
+            putNumber(entry, "cutoff_wavenumber_per_m", mode.cutoffWavenumber());
+            putNumber(entry, "cutoff_frequency_hz", mode.cutoffFrequencyHz());
+            putNumber(entry, "residual", mode.relativeResidual());
+            putNumber(entry, "relative_error_estimate", mode.relativeErrorEstimate());
+        }
+        try {
+            return JSON.writeValueAsString(root).replace("\r\n", "\n") + "\n";
+        } catch (IOException e) {
+            throw new IllegalStateException("a JSON tree of plain values could not be written", e);
+        }
+    }
+
+    /** JSON has no NaN or infinity: such values are written as null. */
+    private static void putNumber(ObjectNode node, String key, double value) {
+        if (Double.isFinite(value)) {
+            node.put(key, value);
+        } else {
+            node.putNull(key);
+        }
+    }
+}
