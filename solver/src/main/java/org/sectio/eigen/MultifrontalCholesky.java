@@ -1,0 +1,178 @@
+package org.sectio.eigen;
+
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
+import org.ejml.data.DMatrixSparseCSC;
+
+/**
+ * Supernodal (multifrontal) Cholesky factorization {@code P A Pᵀ = L Lᵀ} of a sparse symmetric
+ * positive definite lattice matrix (5-point couplings), with {@code P} the nested-dissection order
+ * of {@link NestedDissection} and one dense front per dissection node (Duff and Reid, ACM TOMS 9
+ * (1983) 302–325; Liu, SIAM Review 34 (1992) 82–109). The factor is immutable; {@link #solve} keeps
+ * all working storage local and may be called from several threads at once.
+ *
+ * <p>A solve is a forward sweep up the tree ({@code L11 y = b}, then {@code b_boundary −= L21 y}
+ * per front) and a backward sweep down it ({@code y −= L21ᵀ x_boundary}, then {@code L11ᵀ x = y}).
+ * At the top {@link #SPLIT_DEPTH} levels of the tree the two subtrees are swept independently: in
+ * the forward sweep the second subtree accumulates its contributions to ancestor rows in a private
+ * vector that is added afterwards. Where to split depends on the tree only, so the result is the
+ * same whether the subtrees run one after the other ({@code threads = 1} at factor time) or
+ * concurrently on the common fork-join pool.
+ */
+public final class MultifrontalCholesky implements SymmetricFactorization {
+
+    private final MultifrontalAnalysis analysis;
+    private final FrontFactor[] fronts;
+    private final long nonZeros;
+    private final boolean parallel;
+    private final int[] firstDescendant;
+
+    /** Tree levels whose sibling subtrees are swept independently. */
+    private static final int SPLIT_DEPTH = 2;
+    /** Smallest subtree (unknowns) on either side of a split. */
+    private static final int SPLIT_MINIMUM = 10_000;
+
+    MultifrontalCholesky(MultifrontalAnalysis analysis, FrontFactor[] fronts, int threads) {
+        this.analysis = analysis;
+        this.fronts = fronts;
+        this.parallel = threads > 1;
+        DissectionTree tree = analysis.tree();
+        this.firstDescendant = new int[fronts.length];
+        for (int v = 0; v < fronts.length; v++) {
+            int first = tree.firstChild()[v];
+            firstDescendant[v] = first >= 0 ? firstDescendant[first] : v;
+        }
+        long count = 0;
+        for (FrontFactor front : fronts) {
+            count += front.nonZeros();
+        }
+        this.nonZeros = count;
+    }
+
+    /**
+     * Orders, analyses and factors in one call; use {@link MultifrontalAnalysis#analyse} and
+     * {@link MultifrontalAnalysis#factor} to reuse the analysis over matrices of one pattern.
+     *
+     * @param symmetric SPD matrix in full symmetric storage, couplings between lattice neighbours only
+     * @param column lattice column of every unknown
+     * @param row lattice row of every unknown (points distinct)
+     * @param threads worker threads, {@code ≥ 1}; with more than one, solves also use the common pool
+     * @return the factorization
+     * @throws IllegalArgumentException if the input is inconsistent (see {@link MultifrontalAnalysis#analyse})
+     * @throws NotPositiveDefiniteException if a pivot is {@code ≤ 0}
+     */
+    public static MultifrontalCholesky factor(DMatrixSparseCSC symmetric, int[] column, int[] row, int threads) {
+        return MultifrontalAnalysis.analyse(symmetric, column, row).factor(symmetric, threads);
+    }
+
+    @Override
+    public int size() {
+        return analysis.size();
+    }
+
+    @Override
+    public long factorNonZeros() {
+        return nonZeros;
+    }
+
+    /** @return the symbolic analysis this factor was computed from */
+    public MultifrontalAnalysis analysis() {
+        return analysis;
+    }
+
+    @Override
+    public void solve(double[] rightHandSide, double[] solution) {
+        int n = analysis.size();
+        if (rightHandSide.length != n || solution.length != n) {
+            throw new IllegalArgumentException("multifrontal solve: matrix order " + n + ", right-hand side length "
+                    + rightHandSide.length + ", solution length " + solution.length);
+        }
+        if (rightHandSide == solution) {
+            throw new IllegalArgumentException("multifrontal solve: right-hand side and solution must be distinct arrays");
+        }
+        int[] perm = analysis.tree().permutation();
+        double[] work = new double[n];
+        int half = n / 2;
+        runBoth(() -> gather(rightHandSide, perm, work, 0, half), () -> gather(rightHandSide, perm, work, half, n));
+        int root = fronts.length - 1;
+        forwardSweep(root, 0, work);
+        backwardSweep(root, 0, work);
+        runBoth(() -> scatter(work, perm, solution, 0, half), () -> scatter(work, perm, solution, half, n));
+    }
+
+    private static void gather(double[] source, int[] perm, double[] target, int from, int to) {
+        for (int p = from; p < to; p++) {
+            target[p] = source[perm[p]];
+        }
+    }
+
+    private static void scatter(double[] source, int[] perm, double[] target, int from, int to) {
+        for (int p = from; p < to; p++) {
+            target[perm[p]] = source[p];
+        }
+    }
+
+    private boolean splits(int v, int depth) {
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        return depth < SPLIT_DEPTH && second >= 0 && subtreeSize(first) >= SPLIT_MINIMUM
+                && subtreeSize(second) >= SPLIT_MINIMUM;
+    }
+
+    private int subtreeSize(int v) {
+        return analysis.tree().columnEnd()[v] - analysis.tree().subtreeStart()[v];
+    }
+
+    /** Forward substitution over the subtree of {@code v} (post-order), ending with {@code v} itself. */
+    private void forwardSweep(int v, int depth, double[] work) {
+        if (!splits(v, depth)) {
+            double[] scratch = new double[analysis.largestFront()];
+            for (int u = firstDescendant[v]; u <= v; u++) {
+                FrontSubstitution.forward(fronts[u], work, scratch);
+            }
+            return;
+        }
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        int lo = tree.subtreeStart()[second], hi = tree.columnEnd()[second];
+        double[] privateWork = new double[work.length];
+        System.arraycopy(work, lo, privateWork, lo, hi - lo);
+        runBoth(() -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
+        System.arraycopy(privateWork, lo, work, lo, hi - lo);
+        for (int q : analysis.boundary(second)) {
+            work[q] += privateWork[q];
+        }
+        FrontSubstitution.forward(fronts[v], work, new double[analysis.largestFront()]);
+    }
+
+    /** Backward substitution over the subtree of {@code v}, starting with {@code v} itself. */
+    private void backwardSweep(int v, int depth, double[] work) {
+        if (!splits(v, depth)) {
+            double[] scratch = new double[analysis.largestFront()];
+            for (int u = v; u >= firstDescendant[v]; u--) {
+                FrontSubstitution.backward(fronts[u], work, scratch);
+            }
+            return;
+        }
+        FrontSubstitution.backward(fronts[v], work, new double[analysis.largestFront()]);
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        runBoth(() -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
+    }
+
+    private void runBoth(Runnable first, Runnable second) {
+        if (!parallel) {
+            first.run();
+            second.run();
+            return;
+        }
+        ForkJoinTask<?> task = ForkJoinTask.adapt(second);
+        if (ForkJoinTask.inForkJoinPool()) {
+            task.fork();
+        } else {
+            ForkJoinPool.commonPool().execute(task);
+        }
+        first.run();
+        task.join();
+    }
+}
