@@ -30,6 +30,11 @@ final class FamilySolver {
     /** A family's discrete modes on one grid, ascending. */
     record Result(ModeFamily family, double[] cutoffWavenumbers, double[] residuals, FieldMap[] fields,
                   int unknowns, double assemblySeconds, double factorSeconds, double eigenSeconds) {
+
+        Result withExtraAssembly(double seconds) {
+            return new Result(family, cutoffWavenumbers, residuals, fields, unknowns, assemblySeconds + seconds,
+                    factorSeconds, eigenSeconds);
+        }
     }
 
     private FamilySolver() {

@@ -30,6 +30,8 @@ public final class NeumannCellAssembler {
         TensorGrid grid = cells.grid();
         int nx = grid.cellsX();
         int ny = grid.cellsY();
+        double[] xs = grid.xLines();
+        double[] ys = grid.yLines();
         int[] unknownOf = new int[nx * ny];
         int n = 0;
         for (int j = 0; j < ny; j++) {
@@ -51,10 +53,10 @@ public final class NeumannCellAssembler {
                 column[k] = i;
                 row[k] = j;
                 mass[k] = cells.cellArea(i, j);
-                double down = j > 0 ? cells.horizontalFaceOpenLength(i, j) / centreDistance(grid.yLines(), j) : 0;
-                double left = i > 0 ? cells.verticalFaceOpenLength(i, j) / centreDistance(grid.xLines(), i) : 0;
-                double right = i + 1 < nx ? cells.verticalFaceOpenLength(i + 1, j) / centreDistance(grid.xLines(), i + 1) : 0;
-                double up = j + 1 < ny ? cells.horizontalFaceOpenLength(i, j + 1) / centreDistance(grid.yLines(), j + 1) : 0;
+                double down = j > 0 ? cells.horizontalFaceOpenLength(i, j) / centreDistance(ys, j) : 0;
+                double left = i > 0 ? cells.verticalFaceOpenLength(i, j) / centreDistance(xs, i) : 0;
+                double right = i + 1 < nx ? cells.verticalFaceOpenLength(i + 1, j) / centreDistance(xs, i + 1) : 0;
+                double up = j + 1 < ny ? cells.horizontalFaceOpenLength(i, j + 1) / centreDistance(ys, j + 1) : 0;
                 int kDown = j > 0 ? unknownOf[(j - 1) * nx + i] : -1;
                 int kLeft = i > 0 ? unknownOf[j * nx + i - 1] : -1;
                 int kRight = i + 1 < nx ? unknownOf[j * nx + i + 1] : -1;
