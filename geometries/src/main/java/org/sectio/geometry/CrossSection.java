@@ -1,7 +1,6 @@
 package org.sectio.geometry;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -30,9 +29,36 @@ public interface CrossSection {
     /**
      * @param x a point, m
      * @param y a point, m
-     * @return the filling at that point (only meaningful inside the guide)
+     * @return the material at that point: the first dielectric region holding it, else the filling
+     *     (only meaningful inside the guide)
      */
-    Material materialAt(double x, double y);
+    default Material materialAt(double x, double y) {
+        for (Dielectric d : dielectrics()) {
+            if (d.region().contains(x, y)) {
+                return d.material();
+            }
+        }
+        return filling();
+    }
+
+    /**
+     * The metal walls grouped by conductor: each entry is one closed loop of {@link #wallPieces()} that
+     * is a separate conductor (the outer wall with any ridges first, then each inner conductor). A guide
+     * with N conductors carries N − 1 TEM modes.
+     */
+    default List<Loop> conductors() {
+        return List.of(new Loop(wallPieces()));
+    }
+
+    /** @return the regions filled with another material than {@link #filling()}, not overlapping */
+    default List<Dielectric> dielectrics() {
+        return List.of();
+    }
+
+    /** @return the material that fills the guide outside its dielectric regions */
+    default Material filling() {
+        return Material.AIR;
+    }
 
     /**
      * The x coordinates, ascending, where the line {@code y = const} crosses a wall. Between the
@@ -40,43 +66,17 @@ public interface CrossSection {
      * and so on.
      */
     default double[] wallCrossingsAtY(double y) {
-        List<WallPiece> pieces = wallPieces();
-        double[] found = new double[pieces.size()];
-        int count = 0;
-        for (WallPiece p : pieces) {
-            if ((p.startY() > y) != (p.endY() > y)) {
-                found[count++] = p.x(p.parameterAtY(y));
-            }
-        }
-        double[] crossings = Arrays.copyOf(found, count);
-        Arrays.sort(crossings);
-        return crossings;
+        return WallCrossings.atY(wallPieces(), y);
     }
 
     /** The y coordinates, ascending, where the line {@code x = const} crosses a wall; see {@link #wallCrossingsAtY}. */
     default double[] wallCrossingsAtX(double x) {
-        List<WallPiece> pieces = wallPieces();
-        double[] found = new double[pieces.size()];
-        int count = 0;
-        for (WallPiece p : pieces) {
-            if ((p.startX() > x) != (p.endX() > x)) {
-                found[count++] = p.y(p.parameterAtX(x));
-            }
-        }
-        double[] crossings = Arrays.copyOf(found, count);
-        Arrays.sort(crossings);
-        return crossings;
+        return WallCrossings.atX(wallPieces(), x);
     }
 
     /** @return whether (x, y), m, lies inside the guide (on the interior side of every wall) */
     default boolean contains(double x, double y) {
-        int before = 0;
-        for (double c : wallCrossingsAtY(y)) {
-            if (c <= x) {
-                before++;
-            }
-        }
-        return before % 2 == 1;
+        return WallCrossings.contains(wallPieces(), x, y);
     }
 
     /**

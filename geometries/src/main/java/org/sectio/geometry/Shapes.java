@@ -18,7 +18,7 @@ public final class Shapes {
     public static CrossSection rectangle(double width, double height) {
         requirePositive("width", width);
         requirePositive("height", height);
-        return new MetalSection(String.format("rectangle %.4g × %.4g mm", width * 1e3, height * 1e3),
+        return GuideSection.airFilled(String.format("rectangle %.4g × %.4g mm", width * 1e3, height * 1e3),
                 Outline.startAt(0, 0).lineTo(width, 0).lineTo(width, height).lineTo(0, height).close());
     }
 
@@ -40,7 +40,7 @@ public final class Shapes {
             xs[k] = centreX + c * corners[k][0] - s * corners[k][1];
             ys[k] = centreY + s * corners[k][0] + c * corners[k][1];
         }
-        return new MetalSection(String.format("rectangle %.4g × %.4g mm turned %.3g°", width * 1e3, height * 1e3,
+        return GuideSection.airFilled(String.format("rectangle %.4g × %.4g mm turned %.3g°", width * 1e3, height * 1e3,
                 Math.toDegrees(rotationRadians)),
                 Outline.startAt(xs[0], ys[0]).lineTo(xs[1], ys[1]).lineTo(xs[2], ys[2]).lineTo(xs[3], ys[3]).close());
     }
@@ -52,7 +52,7 @@ public final class Shapes {
      */
     public static CrossSection circle(double radius, double centreX, double centreY) {
         requirePositive("radius", radius);
-        return new MetalSection(String.format("circle of radius %.4g mm", radius * 1e3),
+        return GuideSection.airFilled(String.format("circle of radius %.4g mm", radius * 1e3),
                 Outline.circle(centreX, centreY, radius));
     }
 
@@ -63,7 +63,7 @@ public final class Shapes {
      * @param outline the outline, closed here
      */
     public static CrossSection polygon(String name, Outline outline) {
-        return new MetalSection(name, outline.close());
+        return GuideSection.airFilled(name, outline.close());
     }
 
     private static void requirePositive(String what, double value) {

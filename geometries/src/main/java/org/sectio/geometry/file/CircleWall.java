@@ -1,7 +1,7 @@
 package org.sectio.geometry.file;
 
 import org.sectio.geometry.CrossSection;
-import org.sectio.geometry.MetalSection;
+import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Shapes;
 
 /** {@code "circle": {"radius": r, "centre": [x, y]}}; the centre is optional and defaults to the origin. */
@@ -14,6 +14,6 @@ final class CircleWall implements WallShape {
         double radius = body.get("radius").positiveLength(unit);
         double[] centre = body.has("centre") ? body.get("centre").point(unit) : new double[] {0, 0};
         CrossSection shape = Shapes.circle(radius, centre[0], centre[1]);
-        return name == null ? shape : new MetalSection(name, shape.wallPieces());
+        return name == null ? shape : GuideSection.airFilled(name, shape.wallPieces());
     }
 }

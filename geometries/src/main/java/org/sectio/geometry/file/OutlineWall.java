@@ -2,7 +2,7 @@ package org.sectio.geometry.file;
 
 import java.util.List;
 import org.sectio.geometry.CrossSection;
-import org.sectio.geometry.MetalSection;
+import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Outline;
 
 /**
@@ -28,7 +28,7 @@ final class OutlineWall implements WallShape {
         }
         try {
             String title = name != null ? name : "outline of " + steps.size() + (steps.size() == 1 ? " step" : " steps");
-            return new MetalSection(title, outline.close());
+            return GuideSection.airFilled(title, outline.close());
         } catch (IllegalArgumentException e) {
             throw stepsNode.problem("the closed outline is not a valid wall: " + e.getMessage());
         }

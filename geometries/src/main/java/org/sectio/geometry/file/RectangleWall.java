@@ -1,7 +1,7 @@
 package org.sectio.geometry.file;
 
 import org.sectio.geometry.CrossSection;
-import org.sectio.geometry.MetalSection;
+import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Shapes;
 
 /** {@code "rectangle": {"width": a, "height": b}}: lower-left corner at the origin, sides on the axes. */
@@ -14,6 +14,6 @@ final class RectangleWall implements WallShape {
         double width = body.get("width").positiveLength(unit);
         double height = body.get("height").positiveLength(unit);
         CrossSection shape = Shapes.rectangle(width, height);
-        return name == null ? shape : new MetalSection(name, shape.wallPieces());
+        return name == null ? shape : GuideSection.airFilled(name, shape.wallPieces());
     }
 }
