@@ -82,6 +82,47 @@ public final class Outline {
     }
 
     /**
+     * Adds an arc of an ellipse from the current point to (x, y), chosen among the (up to) four
+     * candidates by two flags exactly as the elliptical arc command of SVG chooses them (W3C SVG 1.1,
+     * Appendix F.6.5, endpoint-to-centre conversion): semi-axes too small to join the two points are
+     * scaled up together until they just do (F.6.6). The arc is split at once where dx/dt or dy/dt
+     * vanishes, so that every piece is monotone in x and y.
+     *
+     * <p>Coordinates here are y-up: {@code counterClockwise} is SVG's sweep flag read in a y-up frame
+     * (an importer of y-down SVG data flips y and so inverts the flag).
+     *
+     * @param x end x, m
+     * @param y end y, m
+     * @param semiAxisX semi-axis along the ellipse's own x direction before rotation, m, &gt; 0
+     * @param semiAxisY semi-axis along the ellipse's own y direction before rotation, m, &gt; 0
+     * @param rotationRadians counter-clockwise turn of the ellipse's own x direction from the x axis
+     * @param largeArc take the candidate sweeping more than half a turn
+     * @param counterClockwise take the candidate traversed counter-clockwise
+     * @throws IllegalArgumentException if a value is not finite, a semi-axis is not positive, or the end
+     *     equals the current point
+     */
+    public Outline ellipticalArcTo(double x, double y, double semiAxisX, double semiAxisY, double rotationRadians,
+                                   boolean largeArc, boolean counterClockwise) {
+        requireFinite("elliptical arc end", x, y);
+        EllipseArcCentre arc = EllipseArcCentre.fromEndpoints(currentX, currentY, x, y, semiAxisX, semiAxisY,
+                rotationRadians, largeArc, counterClockwise);
+        pieces.addAll(EllipseArcPiece.monotonePieces(arc.centreX(), arc.centreY(), arc.semiAxisA(), arc.semiAxisB(),
+                rotationRadians, arc.startParameter(), arc.startParameter() + arc.sweep(), currentX, currentY, x, y));
+        currentX = x;
+        currentY = y;
+        return this;
+    }
+
+    /**
+     * A whole ellipse (x, y) = c + R(φ)(a cos t, b sin t) as a counter-clockwise loop of monotone pieces.
+     */
+    static List<WallPiece> ellipse(double centreX, double centreY, double a, double b, double rotation) {
+        EllipseArcPiece start = EllipseArcPiece.of(centreX, centreY, a, b, rotation, 0, 0.5);
+        return List.copyOf(EllipseArcPiece.monotonePieces(centreX, centreY, a, b, rotation, 0, 2 * Math.PI,
+                start.startX(), start.startY(), start.startX(), start.startY()));
+    }
+
+    /**
      * Closes the outline with a straight segment back to the start if needed.
      *
      * @return the closed loop, counter-clockwise
@@ -120,6 +161,8 @@ public final class Outline {
             } else if (p instanceof ArcPiece a) {
                 out.add(new ArcPiece(a.centreX(), a.centreY(), a.radius(), a.endAngle(), a.startAngle(),
                         a.endX(), a.endY(), a.startX(), a.startY()));
+            } else if (p instanceof EllipseArcPiece e) {
+                out.add(e.reversed());
             } else {
                 throw new IllegalStateException("unknown wall piece " + p.getClass().getName());
             }

@@ -57,6 +57,30 @@ public final class Shapes {
     }
 
     /**
+     * An ellipse centred at (centreX, centreY) whose own axes are turned counter-clockwise by
+     * {@code rotationRadians} from the coordinate axes: (x, y) = c + R(φ)(a cos t, b sin t).
+     *
+     * @param semiAxisX semi-axis a along the ellipse's own x direction, m, &gt; 0
+     * @param semiAxisY semi-axis b along the ellipse's own y direction, m, &gt; 0
+     * @param centreX centre x, m
+     * @param centreY centre y, m
+     * @param rotationRadians the turn φ, radians, finite
+     * @throws IllegalArgumentException if a semi-axis is not a positive length or a value is not finite
+     */
+    public static CrossSection ellipse(double semiAxisX, double semiAxisY, double centreX, double centreY,
+                                       double rotationRadians) {
+        requirePositive("semi-axis x", semiAxisX);
+        requirePositive("semi-axis y", semiAxisY);
+        if (!Double.isFinite(centreX) || !Double.isFinite(centreY) || !Double.isFinite(rotationRadians)) {
+            throw new IllegalArgumentException("ellipse centre and rotation must be finite, got (" + centreX + ", "
+                    + centreY + ") m and " + rotationRadians + " rad");
+        }
+        return GuideSection.airFilled(String.format("ellipse %.4g × %.4g mm turned %.3g°", 2e3 * semiAxisX,
+                2e3 * semiAxisY, Math.toDegrees(rotationRadians)),
+                Outline.ellipse(centreX, centreY, semiAxisX, semiAxisY, rotationRadians));
+    }
+
+    /**
      * A closed outline of segments and arcs built with {@link Outline}.
      *
      * @param name a short description

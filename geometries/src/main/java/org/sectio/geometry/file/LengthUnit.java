@@ -37,6 +37,18 @@ public enum LengthUnit {
     }
 
     /**
+     * @param metres a length in metres
+     * @return it in this unit for a message, six significant digits, e.g. {@code "2.5 mm"}
+     */
+    public String shown(double metres) {
+        double value = metres / this.metres;
+        String digits = Double.isFinite(value) && value != 0
+                ? new java.math.BigDecimal(value).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString()
+                : Double.toString(value).replace(".0", "");
+        return digits + " " + keyword;
+    }
+
+    /**
      * @param keyword a word from a file, e.g. {@code "in"}
      * @return the unit it names, or empty if it names none
      */

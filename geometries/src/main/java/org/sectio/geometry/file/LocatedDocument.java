@@ -88,6 +88,17 @@ final class LocatedDocument {
         return errorAt(valueStarts.get(path), path, problem);
     }
 
+    /**
+     * @return an error located at the {@code column}-th character (1-based) of the string value at
+     *     {@code path}; exact when the string holds no escape sequences (expressions need none)
+     */
+    SectionFileException errorInsideString(DocumentPath path, int column, String problem) {
+        JsonLocation where = valueStarts.get(path);
+        int line = where == null ? 1 : where.getLineNr();
+        int start = where == null ? 1 : where.getColumnNr();
+        return new SectionFileException(file, line, start + column, path.toString(), problem);
+    }
+
     /** @return an error located at the key that introduces {@code path} (or its value) */
     SectionFileException errorAtKey(DocumentPath path, String problem) {
         JsonLocation where = keyStarts.get(path);

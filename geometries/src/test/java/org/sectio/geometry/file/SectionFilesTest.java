@@ -94,9 +94,9 @@ class SectionFilesTest {
     }
 
     @Test
-    void aStringWhereANumberBelongsIsAWrongType() {
-        assertError("{\n  \"wall\": {\"rectangle\": {\"width\": \"22.86\", \"height\": 10}}\n}",
-                "bad.json:2:35: $.wall.rectangle.width: expected a number, got the string \"22.86\"");
+    void aBooleanWhereANumberBelongsIsAWrongType() {
+        assertError("{\n  \"wall\": {\"rectangle\": {\"width\": true, \"height\": 10}}\n}",
+                "bad.json:2:35: $.wall.rectangle.width: expected a number or an expression string, got true");
     }
 
     @Test
@@ -107,25 +107,25 @@ class SectionFilesTest {
 
     @Test
     void aMissingWallIsReportedAtTheTopLevel() {
-        assertError("{\"name\": \"nothing\"}", "bad.json:1:1: $: missing key \"wall\"");
+        assertError("{\"name\": \"nothing\"}", "bad.json:1:1: $: missing key \"wall\" (or \"family\" or \"standard\")");
     }
 
     @Test
     void anUnknownKeyIsReportedAtTheKeyWithTheAllowedOnes() {
         assertError("{\"wall\": {\"rectangle\": {\"width\": 1, \"hieght\": 2}}}",
-                "bad.json:1:37: $.wall.rectangle.hieght: unknown key \"hieght\", expected one of \"width\", \"height\"");
+                "bad.json:1:37: $.wall.rectangle.hieght: unknown key \"hieght\", expected one of \"width\", \"height\", \"centre\", \"rotate_degrees\", \"corner_radius\"");
     }
 
     @Test
     void anUnknownShapeIsReportedWithTheKnownShapes() {
         assertError("{\"wall\": {\"hexagon\": {\"side\": 1}}}",
-                "bad.json:1:11: $.wall.hexagon: unknown key \"hexagon\", expected one of \"rectangle\", \"circle\", \"outline\"");
+                "bad.json:1:11: $.wall.hexagon: unknown key \"hexagon\", expected one of \"rectangle\", \"circle\", \"ellipse\", \"outline\", \"svg_path\", \"union\", \"difference\", \"intersection\"");
     }
 
     @Test
     void twoShapesInOneWallAreRejected() {
         assertError("{\"wall\": {\"circle\": {\"radius\": 1}, \"rectangle\": {\"width\": 1, \"height\": 1}}}",
-                "bad.json:1:10: $.wall: expected exactly one shape key (\"rectangle\", \"circle\", \"outline\"), got 2");
+                "bad.json:1:10: $.wall: expected exactly one shape key (\"rectangle\", \"circle\", \"ellipse\", \"outline\", \"svg_path\", \"union\", \"difference\", \"intersection\"), got 2");
     }
 
     @Test
@@ -186,7 +186,7 @@ class SectionFilesTest {
 
     @Test
     void aTopLevelArrayIsRejected() {
-        assertError("[1, 2]", "bad.json:1:1: $: expected a JSON object with a \"wall\", got an array");
+        assertError("[1, 2]", "bad.json:1:1: $: expected a JSON object with a \"wall\", a \"family\" or a \"standard\", got an array");
     }
 
     @Test
