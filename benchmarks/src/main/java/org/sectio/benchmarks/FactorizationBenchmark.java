@@ -15,7 +15,9 @@ import org.sectio.eigen.NestedDissection;
  * Arguments: optional list of lattice sizes (default 250 500 707 1000). Columns: ordering time,
  * symbolic analysis time (ordering included), numeric factor time with 1 and 2 threads (best of 2
  * and 3), entries of L, one solve (best of 5) with the 1- and 2-thread factor, peak heap (sum of
- * the heap pools' peaks, an upper bound), and {@code ‖Ax − b‖/‖b‖}.
+ * the heap pools' peaks, an upper bound), and {@code ‖Ax − b‖/‖b‖}. A second line per size gives
+ * the time of one block solve for {@code k} = 2, 4, 8 right-hand sides with the 2-thread factor
+ * (best of 3), as a multiple of {@code k} single 2-thread solves.
  */
 public final class FactorizationBenchmark {
 
@@ -95,6 +97,9 @@ public final class FactorizationBenchmark {
             System.out.printf("%6d %9d %8.3f %9.3f %9.3f %9.3f %11d %9.4f %9.4f %8.0f %10.2e%n", sizes[i],
                     disc.column().length, row[4], row[5], row[0], row[1], (long) row[2], row[7], row[3], row[6],
                     row[8]);
+            System.out.printf("%6s block solve, 2 threads: k=2 %.4f s (%.2f x 2 singles), k=4 %.4f s (%.2f x 4), "
+                    + "k=8 %.4f s (%.2f x 8)%n", "", row[9], row[9] / (2 * row[3]), row[10], row[10] / (4 * row[3]),
+                    row[11], row[11] / (8 * row[3]));
         }
         if (sizes.length > 1) {
             System.out.printf("fitted exponent of 2-thread factor time vs unknowns: %.2f%n", slope(logN, logT));
@@ -147,13 +152,33 @@ public final class FactorizationBenchmark {
             r2 += (ax[k] - b[k]) * (ax[k] - b[k]);
             b2 += b[k] * b[k];
         }
+        double[] block = new double[3];
+        for (int i = 0; i < block.length && oneThreadToo; i++) {
+            block[i] = bestBlockSolve(factor, 2 << i);
+        }
         return new double[] {factorOne, factorTwo, factor.factorNonZeros(), solveTwo, (t1 - t0) * 1e-9,
-            (t2 - t1) * 1e-9, peakHeapMegabytes(), solveOne, Math.sqrt(r2 / b2)};
+            (t2 - t1) * 1e-9, peakHeapMegabytes(), solveOne, Math.sqrt(r2 / b2), block[0], block[1], block[2]};
     }
 
     private static double bestSolve(MultifrontalCholesky factor, double[] b, double[] x) {
         double best = Double.MAX_VALUE;
         for (int repeat = 0; repeat < 5; repeat++) {
+            long s = System.nanoTime();
+            factor.solve(b, x);
+            best = Math.min(best, (System.nanoTime() - s) * 1e-9);
+        }
+        return best;
+    }
+
+    private static double bestBlockSolve(MultifrontalCholesky factor, int k) {
+        int n = factor.size();
+        double[][] b = new double[k][];
+        double[][] x = new double[k][n];
+        for (int j = 0; j < k; j++) {
+            b[j] = new Random(2 + j).doubles(n, -1, 1).toArray();
+        }
+        double best = Double.MAX_VALUE;
+        for (int repeat = 0; repeat < 3; repeat++) {
             long s = System.nanoTime();
             factor.solve(b, x);
             best = Math.min(best, (System.nanoTime() - s) * 1e-9);

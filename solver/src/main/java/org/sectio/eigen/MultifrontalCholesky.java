@@ -95,9 +95,52 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int half = n / 2;
         runBoth(() -> gather(rightHandSide, perm, work, 0, half), () -> gather(rightHandSide, perm, work, half, n));
         int root = fronts.length - 1;
-        forwardSweep(root, 0, work);
-        backwardSweep(root, 0, work);
+        forwardSweep(root, 0, work, 1);
+        backwardSweep(root, 0, work, 1);
         runBoth(() -> scatter(work, perm, solution, 0, half), () -> scatter(work, perm, solution, half, n));
+    }
+
+    /**
+     * Solves {@code A X = B} for several right-hand sides in one pass over the factor: the sweeps
+     * read each entry of {@code L} once for all columns (see {@link BlockFrontSubstitution}). Every
+     * solution is bitwise equal to {@link #solve(double[], double[])} of its right-hand side.
+     *
+     * @param rightHandSides {@code k ≥ 1} vectors of length {@link #size()}
+     * @param solutions {@code k} vectors of length {@link #size()}, distinct from the right-hand sides
+     * @throws IllegalArgumentException if counts or lengths disagree, or a solution array is also a
+     *     right-hand side or appears twice
+     */
+    public void solve(double[][] rightHandSides, double[][] solutions) {
+        int n = analysis.size();
+        int k = rightHandSides.length;
+        if (k == 0 || solutions.length != k) {
+            throw new IllegalArgumentException("multifrontal solve: " + k + " right-hand sides and "
+                    + solutions.length + " solutions; need as many of each, at least one");
+        }
+        for (int j = 0; j < k; j++) {
+            if (rightHandSides[j].length != n || solutions[j].length != n) {
+                throw new IllegalArgumentException("multifrontal solve: matrix order " + n + ", right-hand side " + j
+                        + " of length " + rightHandSides[j].length + ", solution of length " + solutions[j].length);
+            }
+            for (int i = 0; i < k; i++) {
+                if (solutions[j] == rightHandSides[i] || (i != j && solutions[j] == solutions[i])) {
+                    throw new IllegalArgumentException("multifrontal solve: solution " + j
+                            + " shares its array with another right-hand side or solution");
+                }
+            }
+        }
+        if (k == 1) {
+            solve(rightHandSides[0], solutions[0]);
+            return;
+        }
+        int[] perm = analysis.tree().permutation();
+        double[] work = new double[n * k];
+        int half = n / 2;
+        runBoth(() -> gather(rightHandSides, perm, work, 0, half), () -> gather(rightHandSides, perm, work, half, n));
+        int root = fronts.length - 1;
+        forwardSweep(root, 0, work, k);
+        backwardSweep(root, 0, work, k);
+        runBoth(() -> scatter(work, perm, solutions, 0, half), () -> scatter(work, perm, solutions, half, n));
     }
 
     private static void gather(double[] source, int[] perm, double[] target, int from, int to) {
@@ -112,6 +155,26 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         }
     }
 
+    private static void gather(double[][] source, int[] perm, double[] target, int from, int to) {
+        int k = source.length;
+        for (int p = from; p < to; p++) {
+            int q = perm[p];
+            for (int j = 0; j < k; j++) {
+                target[p * k + j] = source[j][q];
+            }
+        }
+    }
+
+    private static void scatter(double[] source, int[] perm, double[][] target, int from, int to) {
+        int k = target.length;
+        for (int p = from; p < to; p++) {
+            int q = perm[p];
+            for (int j = 0; j < k; j++) {
+                target[j][q] = source[p * k + j];
+            }
+        }
+    }
+
     private boolean splits(int v, int depth) {
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
@@ -123,41 +186,61 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         return analysis.tree().columnEnd()[v] - analysis.tree().subtreeStart()[v];
     }
 
+    /** Forward step of front {@code u} on {@code k} interleaved vectors. */
+    private void forward(int u, double[] work, double[] scratch, int k) {
+        if (k == 1) {
+            FrontSubstitution.forward(fronts[u], work, scratch);
+        } else {
+            BlockFrontSubstitution.forward(fronts[u], work, scratch, k);
+        }
+    }
+
+    /** Backward step of front {@code u} on {@code k} interleaved vectors. */
+    private void backward(int u, double[] work, double[] scratch, int k) {
+        if (k == 1) {
+            FrontSubstitution.backward(fronts[u], work, scratch);
+        } else {
+            BlockFrontSubstitution.backward(fronts[u], work, scratch, k);
+        }
+    }
+
     /** Forward substitution over the subtree of {@code v} (post-order), ending with {@code v} itself. */
-    private void forwardSweep(int v, int depth, double[] work) {
+    private void forwardSweep(int v, int depth, double[] work, int k) {
         if (!splits(v, depth)) {
-            double[] scratch = new double[analysis.largestFront()];
+            double[] scratch = new double[analysis.largestFront() * k];
             for (int u = firstDescendant[v]; u <= v; u++) {
-                FrontSubstitution.forward(fronts[u], work, scratch);
+                forward(u, work, scratch, k);
             }
             return;
         }
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        int lo = tree.subtreeStart()[second], hi = tree.columnEnd()[second];
+        int lo = tree.subtreeStart()[second] * k, hi = tree.columnEnd()[second] * k;
         double[] privateWork = new double[work.length];
         System.arraycopy(work, lo, privateWork, lo, hi - lo);
-        runBoth(() -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
+        runBoth(() -> forwardSweep(first, depth + 1, work, k), () -> forwardSweep(second, depth + 1, privateWork, k));
         System.arraycopy(privateWork, lo, work, lo, hi - lo);
         for (int q : analysis.boundary(second)) {
-            work[q] += privateWork[q];
+            for (int j = q * k; j < q * k + k; j++) {
+                work[j] += privateWork[j];
+            }
         }
-        FrontSubstitution.forward(fronts[v], work, new double[analysis.largestFront()]);
+        forward(v, work, new double[analysis.largestFront() * k], k);
     }
 
     /** Backward substitution over the subtree of {@code v}, starting with {@code v} itself. */
-    private void backwardSweep(int v, int depth, double[] work) {
+    private void backwardSweep(int v, int depth, double[] work, int k) {
         if (!splits(v, depth)) {
-            double[] scratch = new double[analysis.largestFront()];
+            double[] scratch = new double[analysis.largestFront() * k];
             for (int u = v; u >= firstDescendant[v]; u--) {
-                FrontSubstitution.backward(fronts[u], work, scratch);
+                backward(u, work, scratch, k);
             }
             return;
         }
-        FrontSubstitution.backward(fronts[v], work, new double[analysis.largestFront()]);
+        backward(v, work, new double[analysis.largestFront() * k], k);
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        runBoth(() -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
+        runBoth(() -> backwardSweep(first, depth + 1, work, k), () -> backwardSweep(second, depth + 1, work, k));
     }
 
     private void runBoth(Runnable first, Runnable second) {

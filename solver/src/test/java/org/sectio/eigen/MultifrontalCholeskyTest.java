@@ -226,6 +226,60 @@ class MultifrontalCholeskyTest {
         }
     }
 
+    @ParameterizedTest(name = "k = {0}")
+    @MethodSource("blockSizes")
+    @DisplayName("a solve for k right-hand sides agrees with EJML's dense Cholesky and equals k single solves bitwise")
+    void blockSolveAgreesWithDenseCholesky(int k) {
+        LatticeProblems.Problem problem = LatticeProblems.matrix(LatticeProblems.rectangle(40, 35, 0.2, new Random(16)),
+                0.1, new Random(17));
+        MultifrontalCholesky factor = MultifrontalAnalysis.analyse(problem.matrix(), problem.column(), problem.row(),
+                4).factor(problem.matrix(), 2);
+        int n = problem.size();
+        Random random = new Random(18 + k);
+        double[][] b = new double[k][];
+        double[][] x = new double[k][n];
+        for (int j = 0; j < k; j++) {
+            b[j] = random.doubles(n, -1, 1).toArray();
+        }
+        factor.solve(b, x);
+
+        DMatrixRMaj dense = DConvertMatrixStruct.convert(problem.matrix(), (DMatrixRMaj) null);
+        LinearSolverDense<DMatrixRMaj> reference = LinearSolverFactory_DDRM.chol(n);
+        assertTrue(reference.setA(dense), "EJML accepts the matrix as SPD");
+        double[] single = new double[n];
+        for (int j = 0; j < k; j++) {
+            DMatrixRMaj expected = new DMatrixRMaj(n, 1);
+            reference.solve(new DMatrixRMaj(n, 1, true, b[j]), expected);
+            double difference = 0;
+            for (int p = 0; p < n; p++) {
+                difference += (x[j][p] - expected.data[p]) * (x[j][p] - expected.data[p]);
+            }
+            double relative = Math.sqrt(difference) / LatticeProblems.norm(expected.data);
+            int column = j;
+            assertTrue(relative < AGREEMENT, () -> "column " + column + ": relative difference to EJML " + relative);
+            factor.solve(b[j], single);
+            assertArrayEquals(single, x[j], 0.0, "block column " + j + " equals the single-vector solve bitwise");
+        }
+    }
+
+    static Stream<Integer> blockSizes() {
+        return Stream.of(1, 2, 3, 8);
+    }
+
+    @Test
+    @DisplayName("a block solve rejects mismatched counts, lengths and shared arrays")
+    void blockSolveRejectsBadArguments() {
+        LatticeProblems.Problem problem = LatticeProblems.matrix(LatticeProblems.rectangle(3, 3, 0, new Random(0)), 1, null);
+        MultifrontalCholesky factor = MultifrontalCholesky.factor(problem.matrix(), problem.column(), problem.row(), 1);
+        double[] b = new double[9];
+        assertThrows(IllegalArgumentException.class, () -> factor.solve(new double[][] {b, b}, new double[][] {new double[9]}));
+        assertThrows(IllegalArgumentException.class, () -> factor.solve(new double[][] {b}, new double[][] {new double[8]}));
+        assertThrows(IllegalArgumentException.class, () -> factor.solve(new double[][] {b}, new double[][] {b}));
+        double[] shared = new double[9];
+        assertThrows(IllegalArgumentException.class,
+                () -> factor.solve(new double[][] {b, new double[9]}, new double[][] {shared, shared}));
+    }
+
     @Test
     @DisplayName("solve rejects vectors of the wrong length")
     void wrongLengthIsRejected() {
