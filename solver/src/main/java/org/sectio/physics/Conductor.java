@@ -1,0 +1,139 @@
+package org.sectio.physics;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+/**
+ * A wall metal: its DC conductivity and relative permeability, and the skin-effect relations.
+ *
+ * <p>Skin depth δs = √(2 / (ω μ0 μr σ)) and surface resistance Rs = 1/(σ δs) = √(ω μ0 μr / (2σ))
+ * (Pozar, Microwave Engineering, 4th ed., §1.4 for δs in a good conductor and §1.7 for Rs, section
+ * numbers from memory; valid for a good conductor, σ ≫ ωε, and walls much
+ * thicker than δs). The built-in conductivities are those of Pozar, Appendix F, "Conductivity of
+ * some materials" (values quoted from memory): copper 5.813e7, silver 6.173e7, gold 4.098e7,
+ * aluminium 3.816e7, brass 2.564e7 S/m. Real walls (plating, alloy, temperature, roughness) are
+ * usually worse; see {@link RoughnessFactor}.
+ *
+ * @param name a label, not blank
+ * @param conductivity σ, finite and &gt; 0, S/m
+ * @param relativePermeability μr, finite and ≥ 1 for the metals here (&gt; 0 accepted)
+ */
+public record Conductor(String name, double conductivity, double relativePermeability) {
+
+    /** Copper, 5.813e7 S/m (Pozar Appendix F, from memory). */
+    public static final Conductor COPPER = new Conductor("copper", 5.813e7, 1.0);
+    /** Silver, 6.173e7 S/m (Pozar Appendix F, from memory). */
+    public static final Conductor SILVER = new Conductor("silver", 6.173e7, 1.0);
+    /** Gold, 4.098e7 S/m (Pozar Appendix F, from memory). */
+    public static final Conductor GOLD = new Conductor("gold", 4.098e7, 1.0);
+    /** Aluminium, 3.816e7 S/m (Pozar Appendix F, from memory). */
+    public static final Conductor ALUMINIUM = new Conductor("aluminium", 3.816e7, 1.0);
+    /** Brass, 2.564e7 S/m (Pozar Appendix F, from memory). */
+    public static final Conductor BRASS = new Conductor("brass", 2.564e7, 1.0);
+
+    private static final List<Conductor> BUILT_IN = List.of(COPPER, SILVER, GOLD, ALUMINIUM, BRASS);
+
+    /**
+     * Validates the components.
+     *
+     * @param name as in the record description
+     * @param conductivity as in the record description
+     * @param relativePermeability as in the record description
+     * @throws IllegalArgumentException if a value is out of range; the message names it
+     */
+    public Conductor {
+        if (name == null || name.isBlank()) {
+            throw new IllegalArgumentException("a conductor needs a name, got \"" + name + "\"");
+        }
+        if (!(conductivity > 0) || Double.isInfinite(conductivity)) {
+            throw new IllegalArgumentException("conductivity of " + name + " must be finite and > 0 S/m, got "
+                    + conductivity);
+        }
+        if (!(relativePermeability > 0) || Double.isInfinite(relativePermeability)) {
+            throw new IllegalArgumentException("relative permeability of " + name + " must be finite and > 0, got "
+                    + relativePermeability);
+        }
+    }
+
+    /**
+     * A non-magnetic conductor of the user's own conductivity.
+     *
+     * @param conductivity σ &gt; 0, S/m
+     * @return a conductor named "user (σ S/m)"
+     * @throws IllegalArgumentException if σ is out of range
+     */
+    public static Conductor user(double conductivity) {
+        return new Conductor("user (" + conductivity + " S/m)", conductivity, 1.0);
+    }
+
+    /** @return the built-in conductors, in a fixed order */
+    public static List<Conductor> builtIn() {
+        return BUILT_IN;
+    }
+
+    /**
+     * A built-in conductor by name, ignoring case and surrounding blanks ("aluminum" is accepted for
+     * aluminium).
+     *
+     * @param name e.g. "Copper"
+     * @return the conductor
+     * @throws IllegalArgumentException if the name is unknown; the one-line message lists the known names
+     */
+    public static Conductor named(String name) {
+        String key = name == null ? "" : name.strip().toLowerCase(Locale.ROOT);
+        if (key.equals("aluminum")) {
+            key = "aluminium";
+        }
+        for (Conductor c : BUILT_IN) {
+            if (c.name.equals(key)) {
+                return c;
+            }
+        }
+        throw new IllegalArgumentException("unknown conductor \"" + name + "\"; known: "
+                + BUILT_IN.stream().map(Conductor::name).collect(Collectors.joining(", ")));
+    }
+
+    /**
+     * δs = √(2 / (ω μ0 μr σ)) (Pozar §1.4).
+     *
+     * @param frequencyHz f, finite and &gt; 0, Hz
+     * @return the skin depth, m
+     * @throws IllegalArgumentException if f is out of range
+     */
+    public double skinDepth(double frequencyHz) {
+        double omega = omega(frequencyHz);
+        return Math.sqrt(2.0 / (omega * FreeSpace.PERMEABILITY * relativePermeability * conductivity));
+    }
+
+    /**
+     * Rs = √(ω μ0 μr / (2σ)) of a smooth wall (Pozar §1.7).
+     *
+     * @param frequencyHz f, finite and &gt; 0, Hz
+     * @return the surface resistance, Ω (per square)
+     * @throws IllegalArgumentException if f is out of range
+     */
+    public double surfaceResistance(double frequencyHz) {
+        double omega = omega(frequencyHz);
+        return Math.sqrt(omega * FreeSpace.PERMEABILITY * relativePermeability / (2.0 * conductivity));
+    }
+
+    /**
+     * Rs · K of a rough wall, with K the Hammerstad–Bekkadal factor of {@link RoughnessFactor}.
+     *
+     * @param frequencyHz f, finite and &gt; 0, Hz
+     * @param rmsRoughness Δ, the rms surface roughness, finite and ≥ 0, m
+     * @return the surface resistance of the rough wall, Ω
+     * @throws IllegalArgumentException if a value is out of range
+     */
+    public double surfaceResistance(double frequencyHz, double rmsRoughness) {
+        return surfaceResistance(frequencyHz) * RoughnessFactor.hammerstad(rmsRoughness, skinDepth(frequencyHz));
+    }
+
+    private static double omega(double frequencyHz) {
+        if (!(frequencyHz > 0) || Double.isInfinite(frequencyHz)) {
+            throw new IllegalArgumentException("frequency must be finite and > 0 Hz, got " + frequencyHz);
+        }
+        return 2 * Math.PI * frequencyHz;
+    }
+}
