@@ -7,8 +7,10 @@ import java.util.Random;
  * 602–616) for the operator {@code OP = K⁻¹ M}, {@code K = A − σ M}, which is self-adjoint in the
  * M-inner product (T. Ericsson and A. Ruhe, Math. Comp. 35 (1980) 1251–1268), with full
  * reorthogonalization. The iteration works in the slots {@code [locked, locked + space]} of a shared
- * {@link MOrthogonalBasis}; the slots below {@code locked} hold converged vectors that every new vector
- * is orthogonalized against as well (deflation), without entering the projected matrix.
+ * {@link MOrthogonalBasis}; the slots below {@code locked} hold converged or known eigenvectors that
+ * every new vector, fresh ones included, is orthogonalized against as well (deflation by locking, Y. Saad,
+ * <i>Numerical Methods for Large Eigenvalue Problems</i>, 2nd ed., SIAM 2011, §4.2), without entering the
+ * projected matrix.
  *
  * <p>One step: {@code w = OP v_j}; Gram–Schmidt of w against the whole basis gives {@code α_j = ⟨v_j, w⟩}
  * and {@code β_j = ‖w‖_M}; {@code v_{j+1} = w / β_j}. After every step the projected matrix

@@ -40,6 +40,17 @@ import org.ejml.data.DMatrixSparseCSC;
  * Laplacian with 6 pairs one copy of the (0,2) doublet was, and the check recovered it. The check costs
  * about 7 to 12 operator applications.
  *
+ * <p>Known eigenvectors can be deflated ({@link #solve(DMatrixSparseCSC, double[], double,
+ * SymmetricFactorization, IterationListener, double[][])}), e.g. the constant null vector of a Neumann
+ * Laplacian. They are M-orthonormalized into the first basis slots and locked there: the start vector,
+ * every Lanczos vector, every restart's fresh vector and the check's vectors are M-orthogonalized against
+ * them by the same Gram–Schmidt, so the iteration runs on the M-orthogonal complement {@code Z^⊥} of their
+ * span Z. Since OP is M-self-adjoint and Z is OP-invariant, {@code Z^⊥} is OP-invariant too and the
+ * spectrum found there is that of OP minus the eigenvalues of Z; this is deflation by explicit
+ * orthogonalization against known eigenvectors (Y. Saad, <i>Numerical Methods for Large Eigenvalue
+ * Problems</i>, 2nd ed., SIAM 2011, §4.2, "deflation techniques", locking of converged vectors). The
+ * deflated vectors are not returned and no pair is spent on them.
+ *
  * <p>Returned residuals are recomputed from {@code A} and {@code M}, as in {@link ShiftInvertLanczos},
  * and a pair with a normwise backward error far above the tolerance is refused.
  */
@@ -109,23 +120,52 @@ public final class ThickRestartLanczos {
         return solveCounted(a, m, shift, shifted, listener).pairs();
     }
 
+    /**
+     * As {@link #solve(DMatrixSparseCSC, double[], double, SymmetricFactorization, IterationListener)}, on
+     * the M-orthogonal complement of known eigenvectors: the {@code count} pairs closest to the shift
+     * among those M-orthogonal to {@code deflated}. The deflated vectors need not be normalized or
+     * M-orthogonal to each other (they are M-orthonormalized by Gram–Schmidt in a copy); their span must
+     * be invariant, i.e. each an eigenvector {@code A z = λ M z} or a combination within one eigenspace.
+     *
+     * @param deflated d known eigenvectors, each of length n; not modified; none returned
+     * @return {@code count} pairs as there, every vector M-orthogonal to the deflated ones
+     * @throws IllegalArgumentException as there, or if {@code count ≥ n − d}, a deflated vector has the
+     *         wrong length, is not finite or no eigenvector (normwise backward error of its Rayleigh
+     *         quotient {@code zᵀAz / zᵀMz} above the limit stated there), or lies in the span of the
+     *         previous ones (less than 1e-8 of its M-norm left by Gram–Schmidt)
+     * @throws EigenSolverException as there
+     */
+    public Eigenpairs solve(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
+            IterationListener listener, double[][] deflated) {
+        return solveCounted(a, m, shift, shifted, listener, deflated).pairs();
+    }
+
     /** {@link #solve} with the counts of the iteration, for tests and measurements. */
     Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
             IterationListener listener) {
+        return solveCounted(a, m, shift, shifted, listener, new double[0][]);
+    }
+
+    /** {@link #solve} with deflated vectors and the counts of the iteration. */
+    Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
+            IterationListener listener, double[][] deflated) {
         int n = checkedOrder(a, m, shifted);
+        int d = deflated.length;
         int count = settings.count();
-        if (count >= n) {
+        if (count >= n - d) {
             throw new IllegalArgumentException("count = " + count + " pairs asked of a pencil of order " + n
-                    + "; ask for at most n - 1, or use a dense solver for all of them");
+                    + " with " + d + " deflated vectors; ask for at most n - d - 1 = " + (n - d - 1)
+                    + ", or use a dense solver for all of them");
         }
-        int space = Math.min(settings.lanczosVectors(), n);
-        int checkSpace = Math.min(Math.max(space - count, CHECK_SPACE), n - count);
-        MOrthogonalBasis basis = new MOrthogonalBasis(m, Math.max(space, count + checkSpace) + 1);
+        int space = Math.min(settings.lanczosVectors(), n - d);
+        int checkSpace = Math.min(Math.max(space - count, CHECK_SPACE), n - d - count);
+        MOrthogonalBasis basis = new MOrthogonalBasis(m, d + Math.max(space, count + checkSpace) + 1);
+        lockDeflated(a, m, shift, deflated, basis);
         ThickRestartCycle cycle = new ThickRestartCycle(basis, shifted, Objects.requireNonNull(listener, "listener"),
                 new Random(settings.seed()), n);
         double tolerance = settings.relativeTolerance();
-        cycle.randomStart(0);
-        ThickRestartCycle.Outcome found = cycle.run(0, space, count, settings.maxRestarts(),
+        cycle.randomStart(d);
+        ThickRestartCycle.Outcome found = cycle.run(d, space, count, settings.maxRestarts(),
                 (theta, estimates) -> allConverged(theta, estimates, 0, count, tolerance), tolerance);
         int restarts = found.restarts();
         double[] values = found.values();
@@ -134,8 +174,8 @@ public final class ThickRestartLanczos {
         while (true) {
             double threshold = Math.abs(values[count - 1]) * (1 + MISS_MARGIN);
             int before = cycle.applications();
-            cycle.randomStart(count);
-            ThickRestartCycle.Outcome check = cycle.run(count, checkSpace, 1, settings.maxRestarts(),
+            cycle.randomStart(d + count);
+            ThickRestartCycle.Outcome check = cycle.run(d + count, checkSpace, 1, settings.maxRestarts(),
                     (theta, estimates) -> Math.abs(theta[0]) > threshold
                             ? allConverged(theta, estimates, 0, 1, tolerance)
                             : estimates[0] <= CHECK_TOLERANCE * Math.abs(theta[0]), tolerance);
@@ -146,11 +186,11 @@ public final class ThickRestartLanczos {
             }
             // a converged pair M-orthogonal to all found ones lies beyond the smallest wanted |θ|: it replaces it
             misses++;
-            basis.swap(count - 1, count);
+            basis.swap(d + count - 1, d + count);
             values[count - 1] = check.values()[0];
-            sortByMagnitude(values, basis);
+            sortByMagnitude(values, basis, d);
         }
-        Eigenpairs pairs = checkedPairs(a, m, shift, values, basis, cycle.applications(), restarts);
+        Eigenpairs pairs = checkedPairs(a, m, shift, values, basis, d, cycle.applications(), restarts);
         return new Solution(pairs, restarts, misses, checkApplications);
     }
 
@@ -163,20 +203,72 @@ public final class ThickRestartLanczos {
         return true;
     }
 
-    /** Insertion sort of the values and their basis slots by decreasing magnitude. */
-    private static void sortByMagnitude(double[] values, MOrthogonalBasis basis) {
+    /** Insertion sort of the values and their basis slots {@code from + i} by decreasing magnitude. */
+    private static void sortByMagnitude(double[] values, MOrthogonalBasis basis, int from) {
         for (int i = 1; i < values.length; i++) {
             for (int j = i; j > 0 && Math.abs(values[j]) > Math.abs(values[j - 1]); j--) {
                 double t = values[j];
                 values[j] = values[j - 1];
                 values[j - 1] = t;
-                basis.swap(j, j - 1);
+                basis.swap(from + j, from + j - 1);
             }
         }
     }
 
+    /**
+     * Copies the deflated vectors into slots {@code [0, d)}, M-orthonormalizes them and checks that each
+     * is an eigenvector: backward error of {@code (ρ, z)}, {@code ρ = zᵀAz / zᵀMz}, within the limit of
+     * the returned pairs.
+     */
+    private void lockDeflated(DMatrixSparseCSC a, double[] m, double shift, double[][] deflated,
+            MOrthogonalBasis basis) {
+        int n = m.length;
+        double limit = backwardErrorLimit(a, m, shift);
+        double aNorm = PencilResiduals.norm1(a);
+        double mNorm = PencilResiduals.norm1(m);
+        double[] h = new double[deflated.length + 1];
+        for (int k = 0; k < deflated.length; k++) {
+            double[] z = deflated[k];
+            if (z.length != n) {
+                throw new IllegalArgumentException("deflated vector " + k + " has length " + z.length
+                        + " for a pencil of order " + n);
+            }
+            double rho = rayleighQuotient(a, m, z);
+            double[] error = residuals(a, m, rho, z);
+            double backward = error[1] / ((aNorm + Math.abs(rho) * mNorm) * error[2]);
+            if (!(backward <= limit)) {
+                throw new IllegalArgumentException("deflated vector " + k + " is no finite eigenvector of the pencil:"
+                        + " its Rayleigh quotient " + rho + " has backward error " + backward + " above " + limit);
+            }
+            System.arraycopy(z, 0, basis.vector(k), 0, n);
+            double[] norms = basis.orthogonalize(k, k, h);
+            if (!(norms[1] > 1e-16 * norms[0])) {
+                throw new IllegalArgumentException("deflated vector " + k + " lies in the span of the previous "
+                        + k + ": squared M-norm " + norms[0] + " before and " + norms[1] + " after orthogonalization");
+            }
+            basis.scale(k, 1 / Math.sqrt(norms[1]));
+        }
+    }
+
+    private static double rayleighQuotient(DMatrixSparseCSC a, double[] m, double[] z) {
+        double[] az = new double[z.length];
+        PencilResiduals.multiply(a, z, az);
+        double numerator = 0;
+        double denominator = 0;
+        for (int i = 0; i < z.length; i++) {
+            numerator += z[i] * az[i];
+            denominator += z[i] * m[i] * z[i];
+        }
+        return numerator / denominator;
+    }
+
+    private double backwardErrorLimit(DMatrixSparseCSC a, double[] m, double shift) {
+        return BACKWARD_ERROR_FACTOR * settings.relativeTolerance()
+                * (1 + Math.abs(shift) * PencilResiduals.norm1(m) / PencilResiduals.norm1(a));
+    }
+
     private Eigenpairs checkedPairs(DMatrixSparseCSC a, double[] m, double shift, double[] theta,
-            MOrthogonalBasis basis, int applications, int restarts) {
+            MOrthogonalBasis basis, int from, int applications, int restarts) {
         int count = theta.length;
         Integer[] order = new Integer[count];
         double[] lambda = new double[count];
@@ -189,12 +281,12 @@ public final class ThickRestartLanczos {
         double[][] vectors = new double[count][];
         for (int k = 0; k < count; k++) {
             values[k] = lambda[order[k]];
-            vectors[k] = basis.vector(order[k]);
+            vectors[k] = basis.vector(from + order[k]);
         }
         double tolerance = settings.relativeTolerance();
         double aNorm = PencilResiduals.norm1(a);
         double mNorm = PencilResiduals.norm1(m);
-        double limit = BACKWARD_ERROR_FACTOR * tolerance * (1 + Math.abs(shift) * mNorm / aNorm);
+        double limit = backwardErrorLimit(a, m, shift);
         double[][] errors = new double[count][];
         IntStream.range(0, count).parallel().forEach(k -> errors[k] = residuals(a, m, values[k], vectors[k]));
         double[] relative = new double[count];

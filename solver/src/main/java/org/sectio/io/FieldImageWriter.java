@@ -177,7 +177,7 @@ public final class FieldImageWriter {
             g.drawLine(tickX, rows[k], tickX + 4, rows[k]);
             g.drawString(labels[k], tickX + 7, rows[k] + 4);
         }
-        String caption = "normalized " + (family == ModeFamily.TE ? "Hz" : "Ez");
+        String caption = "normalized " + (family == ModeFamily.TE ? "Hz" : family == ModeFamily.TM ? "Ez" : "potential");
         g.drawString(caption, layout.barX() - 8, layout.barY() + layout.barHeight() + 20);
     }
 }

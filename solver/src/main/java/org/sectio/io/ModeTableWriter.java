@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Locale;
 import org.sectio.modes.GridSummary;
 import org.sectio.modes.Mode;
+import org.sectio.modes.ModeFamily;
 import org.sectio.modes.ModeSet;
 import org.sectio.modes.SolveTiming;
 
@@ -22,18 +23,22 @@ import org.sectio.modes.SolveTiming;
  * lowest first. Values are SI (Hz, rad/m, m, s) in CSV and JSON; the readable table shows GHz and mm.
  *
  * <p>CSV columns: {@code number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,
- * relative_error_estimate,residual}, with an empty field for an estimate not made. JSON: an object
+ * relative_error_estimate,residual,characteristic_impedance_ohm}, with an empty field for an estimate
+ * not made and for the impedance of a TE or TM mode. {@code cutoff_wavenumber_per_m} is k0 = 2π fc / c,
+ * the free-space wavenumber at cutoff (kc for an air-filled guide; see {@code Mode}). TEM modes
+ * (family {@code TEM}) print a cutoff of {@code 0} and their impedance in Ω. JSON: an object
  * with {@code section}, {@code grid} {cells_x, cells_y, cell_width_m, cell_height_m, unknowns_te,
  * unknowns_tm}, {@code timing} {assembly_s, factor_s, eigen_s, total_s} and {@code modes}, each mode
  * with {@code number, family, index, label, cutoff_wavenumber_per_m, cutoff_frequency_hz, residual,
- * relative_error_estimate} (null when not estimated). Numbers in CSV and JSON print the shortest
+ * relative_error_estimate} (null when not estimated) and {@code characteristic_impedance_ohm} (null
+ * for TE and TM). The readable table adds a column "Z0 (ohm)" only when a TEM mode is listed. Numbers in CSV and JSON print the shortest
  * decimal that reads back to the same double.
  */
 public final class ModeTableWriter {
 
     /** The CSV header row. */
     public static final String CSV_HEADER = "number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,"
-            + "relative_error_estimate,residual";
+            + "relative_error_estimate,residual,characteristic_impedance_ohm";
 
     private static final String TABLE_HEADER = String.format(Locale.ROOT, "%3s  %-6s  %5s  %14s  %14s  %10s  %9s",
             "#", "family", "index", "cutoff (GHz)", "kc (rad/m)", "rel. error", "residual");
@@ -92,14 +97,23 @@ public final class ModeTableWriter {
         text.append(String.format(Locale.ROOT, "grid %d × %d cells of %.5g × %.5g mm; unknowns TE %d, TM %d%n",
                 grid.cellsX(), grid.cellsY(), grid.cellWidth() * 1e3, grid.cellHeight() * 1e3,
                 grid.unknownsTE(), grid.unknownsTM()));
-        text.append(TABLE_HEADER).append('\n');
+        boolean anyTem = modes.modes().stream().anyMatch(m -> m.family() == ModeFamily.TEM);
+        text.append(TABLE_HEADER).append(anyTem ? String.format(Locale.ROOT, "  %10s", "Z0 (ohm)") : "").append('\n');
         int number = 1;
         for (Mode mode : byCutoff(modes)) {
-            text.append(String.format(Locale.ROOT, "%3d  %-6s  %5d  %14.7f  %14.6f  %10s  %9s%n", number++,
-                    mode.family(), mode.index(), mode.cutoffFrequencyHz() * 1e-9, mode.cutoffWavenumber(),
+            boolean tem = mode.family() == ModeFamily.TEM;
+            text.append(String.format(Locale.ROOT, "%3d  %-6s  %5d  %14s  %14s  %10s  %9s", number++,
+                    mode.family(), mode.index(),
+                    tem ? "0" : String.format(Locale.ROOT, "%.7f", mode.cutoffFrequencyHz() * 1e-9),
+                    tem ? "0" : String.format(Locale.ROOT, "%.6f", mode.cutoffWavenumber()),
                     Double.isNaN(mode.relativeErrorEstimate()) ? "-"
                             : String.format(Locale.ROOT, "%.1e", mode.relativeErrorEstimate()),
                     String.format(Locale.ROOT, "%.1e", mode.relativeResidual())));
+            if (anyTem) {
+                text.append(String.format(Locale.ROOT, "  %10s",
+                        tem ? String.format(Locale.ROOT, "%.4f", mode.characteristicImpedanceOhms()) : "-"));
+            }
+            text.append('\n');
         }
         SolveTiming time = modes.timing();
         text.append(String.format(Locale.ROOT,
@@ -112,10 +126,13 @@ public final class ModeTableWriter {
         StringBuilder text = new StringBuilder(CSV_HEADER).append('\n');
         int number = 1;
         for (Mode mode : byCutoff(modes)) {
+            boolean tem = mode.family() == ModeFamily.TEM;
             text.append(number++).append(',').append(mode.family()).append(',').append(mode.index()).append(',')
-                    .append(mode.cutoffFrequencyHz()).append(',').append(mode.cutoffWavenumber()).append(',')
+                    .append(tem ? "0" : Double.toString(mode.cutoffFrequencyHz())).append(',')
+                    .append(tem ? "0" : Double.toString(mode.cutoffWavenumber())).append(',')
                     .append(Double.isNaN(mode.relativeErrorEstimate()) ? "" : Double.toString(mode.relativeErrorEstimate()))
-                    .append(',').append(mode.relativeResidual()).append('\n');
+                    .append(',').append(mode.relativeResidual()).append(',')
+                    .append(tem ? Double.toString(mode.characteristicImpedanceOhms()) : "").append('\n');
         }
         return text.toString();
     }
@@ -149,6 +166,7 @@ public final class ModeTableWriter {
             putNumber(entry, "cutoff_frequency_hz", mode.cutoffFrequencyHz());
             putNumber(entry, "residual", mode.relativeResidual());
             putNumber(entry, "relative_error_estimate", mode.relativeErrorEstimate());
+            putNumber(entry, "characteristic_impedance_ohm", mode.characteristicImpedanceOhms());
         }
         try {
             return JSON.writeValueAsString(root).replace("\r\n", "\n") + "\n";

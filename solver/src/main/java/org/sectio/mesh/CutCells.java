@@ -88,7 +88,7 @@ public final class CutCells {
      * Adds, for one grid line whose inside intervals are [c0, c1], [c2, c3], …, the overlap of each
      * interval with each span [lines[k], lines[k+1]] into {@code open[offset + k * stride]}.
      */
-    private static void accumulateOpenLengths(double[] crossings, double[] lines, double[] open, int offset, int stride) {
+    static void accumulateOpenLengths(double[] crossings, double[] lines, double[] open, int offset, int stride) {
         for (int p = 0; p + 1 < crossings.length; p += 2) {
             double from = crossings[p];
             double to = crossings[p + 1];
@@ -109,6 +109,15 @@ public final class CutCells {
 
     /** Splits the piece where it crosses grid lines and adds ∫ (x − x_i) dy of each part to its cell. */
     private static void addWallIntegrals(WallPiece piece, TensorGrid grid, double[] area) {
+        addWallIntegrals(piece, grid, area, null, null);
+    }
+
+    /**
+     * Splits the piece where it crosses grid lines and adds ∫ (x − x_i) dy of each part to its cell
+     * and, when the arrays are given, the part's rise Δy to {@code rise} and run Δx to {@code run}
+     * (so that (Σ Δy, −Σ Δx) is ∫ n dℓ over the pieces in the cell, n the normal on their right).
+     */
+    static void addWallIntegrals(WallPiece piece, TensorGrid grid, double[] area, double[] rise, double[] run) {
         double t0 = piece.startParameter();
         double t1 = piece.endParameter();
         double[] xs = grid.xLines();
@@ -142,6 +151,10 @@ public final class CutCells {
             int j = grid.cellRowOf(piece.y(mid));
             double dy = piece.y(tb) - piece.y(ta);
             area[j * nx + i] += piece.integralXdy(ta, tb) - xs[i] * dy;
+            if (rise != null) {
+                rise[j * nx + i] += dy;
+                run[j * nx + i] += piece.x(tb) - piece.x(ta);
+            }
         }
     }
 

@@ -1,7 +1,5 @@
 package org.sectio.modes;
 
-import java.util.ArrayList;
-import java.util.List;
 import org.sectio.eigen.Eigenpairs;
 import org.sectio.eigen.EigenSolverException;
 import org.sectio.eigen.LanczosSettings;
@@ -15,6 +13,7 @@ import org.sectio.mesh.TensorGrid;
 import org.sectio.operator.DirichletNodeAssembler;
 import org.sectio.operator.LatticePencil;
 import org.sectio.operator.NeumannCellAssembler;
+import org.sectio.operator.PermittivityMap;
 
 /**
  * One family on one grid: assemble → shift → factor → Lanczos → fields. The steps of the method,
@@ -42,8 +41,13 @@ final class FamilySolver {
 
     /** Assembles the pencil of a family on cut cells. */
     static LatticePencil pencil(ModeFamily family, CutCells cells) {
-        return family == ModeFamily.TE ? NeumannCellAssembler.assemble(cells)
-                : DirichletNodeAssembler.assemble(NodeLinks.of(cells));
+        return pencil(family, cells, PermittivityMap.uniform(1.0));
+    }
+
+    /** Assembles the pencil of a family (TE: Hz, TM: Ez) at cutoff with the medium's εr; λ = k0². */
+    static LatticePencil pencil(ModeFamily family, CutCells cells, PermittivityMap medium) {
+        return family == ModeFamily.TE ? NeumannCellAssembler.assemble(cells, medium)
+                : DirichletNodeAssembler.assemble(NodeLinks.of(cells), medium);
     }
 
     /**
@@ -57,16 +61,22 @@ final class FamilySolver {
 
     static Result solve(ModeFamily family, CutCells cells, int count, int threads, SolveProgress progress,
                         double progressFrom, double progressTo) {
+        return solve(family, cells, PermittivityMap.uniform(1.0), count, threads, progress, progressFrom, progressTo);
+    }
+
+    /** As above with dielectrics: eigenvalues are k0², and the shift is divided by the largest εr. */
+    static Result solve(ModeFamily family, CutCells cells, PermittivityMap medium, int count, int threads,
+                        SolveProgress progress, double progressFrom, double progressTo) {
         long t0 = System.nanoTime();
-        LatticePencil pencil = pencil(family, cells);
+        LatticePencil pencil = pencil(family, cells, medium);
         int n = pencil.size();
-        boolean dropConstant = family == ModeFamily.TE;
-        int wanted = count + (dropConstant ? 1 : 0);
-        if (n < wanted + 2) {
+        // TE: the constant Hz solves the Neumann problem with λ = 0 and is not a mode; it is deflated
+        double[][] deflated = family == ModeFamily.TE ? new double[][] {constant(n)} : new double[0][];
+        if (n < count + deflated.length + 2) {
             throw new SolveException(family + ": the grid has only " + n + " unknowns for " + count
                     + " modes; use more cells across");
         }
-        double sigma = shift(family, cells.totalArea());
+        double sigma = shift(family, cells.totalArea()) / medium.maximum();
         long t1 = System.nanoTime();
         progress.report(family + ": factorizing " + n + " unknowns", progressFrom + 0.2 * (progressTo - progressFrom));
         SymmetricFactorization factor;
@@ -78,44 +88,58 @@ final class FamilySolver {
         }
         long t2 = System.nanoTime();
         // a basis of 2·count + 10 (at least 30) vectors: fewer restarts, fewer solves (EigensolverBenchmark)
-        ThickRestartLanczos lanczos = new ThickRestartLanczos(LanczosSettings.forCount(wanted)
-                .withLanczosVectors(Math.min(n, Math.max(2 * wanted + 10, 30))));
+        ThickRestartLanczos lanczos = new ThickRestartLanczos(LanczosSettings.forCount(count)
+                .withLanczosVectors(Math.min(n - deflated.length, Math.max(2 * count + 10, 30))));
         Eigenpairs pairs;
         try {
             pairs = lanczos.solve(pencil.stiffness(), pencil.mass(), sigma, factor, applications ->
                     progress.report(family + ": Lanczos step " + applications,
-                            progressFrom + (0.5 + 0.5 * Math.min(1.0, applications / (3.0 * wanted)))
-                                    * (progressTo - progressFrom)));
+                            progressFrom + (0.5 + 0.5 * Math.min(1.0, applications / (3.0 * count)))
+                                    * (progressTo - progressFrom)), deflated);
         } catch (EigenSolverException e) {
             throw new SolveException(family + ": " + e.getMessage(), e);
         }
         long t3 = System.nanoTime();
         double[] values = pairs.values();
-        int first = 0;
-        if (dropConstant) {
-            // the constant Hz solves the Neumann problem with λ = 0 and is not a mode
-            if (!(Math.abs(values[0]) < 1e-6 * Math.abs(values[1]))) {
-                throw new SolveException("TE: expected one zero eigenvalue (the constant field), found λ₀ = "
-                        + values[0] + ", λ₁ = " + values[1] + " rad²/m²; the guide may be split into parts");
-            }
-            if (Math.abs(values[1]) < 1e-6 * Math.abs(values[Math.min(2, values.length - 1)])) {
-                throw new SolveException("TE: more than one zero eigenvalue; the cross-section falls apart into"
-                        + " separate regions at this grid");
-            }
-            first = 1;
+        if (family == ModeFamily.TE) {
+            requireOneZero(values, sigma);
         }
         double[] residuals = pairs.relativeResiduals();
-        List<Double> kc = new ArrayList<>();
-        List<Double> res = new ArrayList<>();
-        List<FieldMap> fields = new ArrayList<>();
-        for (int k = first; k < values.length && kc.size() < count; k++) {
-            kc.add(Math.sqrt(Math.max(0, values[k])));
-            res.add(residuals[k]);
-            fields.add(fieldOf(family, cells.grid(), pencil, pairs.vector(k)));
+        FieldMap[] fields = new FieldMap[values.length];
+        double[] kc = new double[values.length];
+        for (int k = 0; k < values.length; k++) {
+            kc[k] = Math.sqrt(Math.max(0, values[k]));
+            fields[k] = fieldOf(family, cells.grid(), pencil, pairs.vector(k));
         }
-        return new Result(family, kc.stream().mapToDouble(Double::doubleValue).toArray(),
-                res.stream().mapToDouble(Double::doubleValue).toArray(), fields.toArray(FieldMap[]::new), n,
-                (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, (t3 - t2) * 1e-9);
+        return new Result(family, kc, residuals, fields, n, (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, (t3 - t2) * 1e-9);
+    }
+
+    /** The constant vector (all ones), the null vector of the Neumann cell Laplacian. */
+    private static double[] constant(int n) {
+        double[] ones = new double[n];
+        java.util.Arrays.fill(ones, 1.0);
+        return ones;
+    }
+
+    /**
+     * Refuses a second zero eigenvalue of the TE pencil, the constant being deflated. The cell matrix is a
+     * weighted graph Laplacian {@code Σ w (e_k − e_l)(e_k − e_l)ᵀ}, w > 0 over shared faces, whose null
+     * space is spanned by the indicators of the connected components (F. Chung, <i>Spectral Graph
+     * Theory</i>, AMS 1997, Lemma 1.7), so a returned λ₀ ≈ 0 means the cross-section falls apart into
+     * separate regions. "≈ 0" is {@code |λ₀| < 10⁻⁶ max(|λ₁|, |σ|)}: the next value or, if it is a zero
+     * as well or absent, the shift (a tenth of the Szegő–Weinberger bound of a connected region).
+     *
+     * @param values the TE eigenvalues found with the constant deflated, ascending, rad²/m²
+     * @param sigma the shift, rad²/m²
+     * @throws SolveException if λ₀ ≈ 0, with λ₀, λ₁ and σ in a one-line message
+     */
+    static void requireOneZero(double[] values, double sigma) {
+        double next = values.length > 1 ? Math.abs(values[1]) : 0;
+        if (Math.abs(values[0]) < 1e-6 * Math.max(next, Math.abs(sigma))) {
+            throw new SolveException("TE: more than one zero eigenvalue (lambda0 = " + values[0] + ", next "
+                    + (values.length > 1 ? values[1] : Double.NaN) + ", shift " + sigma + " rad²/m² with the constant"
+                    + " field deflated); the cross-section falls apart into separate regions at this grid");
+        }
     }
 
     /** Puts an eigenvector on the grid's cell centres (TE) or nodes (TM), scaled to a peak of +1. */

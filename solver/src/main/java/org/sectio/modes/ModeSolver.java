@@ -12,8 +12,10 @@ import java.util.Map;
 import org.sectio.geometry.CrossSection;
 import org.sectio.io.MatrixMarketWriter;
 import org.sectio.mesh.CutCells;
+import org.sectio.mesh.GridPlanner;
 import org.sectio.mesh.TensorGrid;
 import org.sectio.operator.LatticePencil;
+import org.sectio.operator.PermittivityMap;
 
 /**
  * The one entry point for a solve, used by the command line, batch work and the viewer alike.
@@ -36,7 +38,9 @@ public final class ModeSolver {
     }
 
     /**
-     * Finds the lowest modes of a cross-section on a grid fitted to its bounding box.
+     * Finds the lowest modes of a cross-section on the grid planned for it by {@link GridPlanner}: lines
+     * on the bounding box and on every axis-aligned straight wall, cells graded toward re-entrant
+     * corners, and every second line forming the coarse plan that the error estimate re-solves on.
      *
      * @param section the cross-section (metres)
      * @param settings modes, families, grid or target accuracy, error estimate, threads
@@ -48,7 +52,7 @@ public final class ModeSolver {
         if (!Double.isNaN(settings.targetRelativeError())) {
             return solve(section, settings.withCellsAcross(cellsForTarget(section, settings, progress)), progress);
         }
-        return solveOnGrid(section, TensorGrid.fitted(section.bounds(), settings.cellsAcross()), settings, progress);
+        return solveOnGrid(section, GridPlanner.plan(section, settings.cellsAcross()), settings, progress);
     }
 
     /**
@@ -89,10 +93,12 @@ public final class ModeSolver {
                         err = 2.0 * Math.abs(kc - c.cutoffWavenumbers()[k]) / (3.0 * kc);
                     }
                 }
+                // the eigenvalue is k0², so fc = c k0 / (2π) whatever the filling
                 modes.add(new Mode(r.family(), k + 1, kc, kc * SPEED_OF_LIGHT / (2 * Math.PI), r.residuals()[k], err,
                         r.fields()[k]));
             }
         }
+        modes.addAll(temModes(section, grid, settings));
         if (coarse != null) {
             for (FamilySolver.Result r : coarse.values()) {
                 assembly += r.assemblySeconds();
@@ -118,16 +124,54 @@ public final class ModeSolver {
         CutCells cells = CutCells.of(section, grid);
         double cutSeconds = (System.nanoTime() - cutStart) * 1e-9;
         Map<ModeFamily, FamilySolver.Result> results = new EnumMap<>(ModeFamily.class);
-        List<ModeFamily> families = settings.families().stream().sorted().toList();
-        double share = (to - from) / families.size();
+        List<ModeFamily> families = settings.families().stream().filter(f -> f != ModeFamily.TEM).sorted().toList();
+        PermittivityMap medium = medium(section, grid);
+        double share = (to - from) / Math.max(1, families.size());
         for (int f = 0; f < families.size(); f++) {
             ModeFamily family = families.get(f);
-            FamilySolver.Result r = FamilySolver.solve(family, cells, settings.modeCount(), settings.threads(), progress,
-                    from + f * share, from + (f + 1) * share);
+            FamilySolver.Result r = FamilySolver.solve(family, cells, medium, settings.modeCount(), settings.threads(),
+                    progress, from + f * share, from + (f + 1) * share);
             // the cut cells serve both families; their time is booked to assembly, split evenly
             results.put(family, r.withExtraAssembly(cutSeconds / families.size()));
         }
         return results;
+    }
+
+    /** The materials on the grid, refusing magnetic ones with a message for the user. */
+    private static PermittivityMap medium(CrossSection section, TensorGrid grid) {
+        try {
+            return PermittivityMap.of(section, grid);
+        } catch (IllegalArgumentException e) {
+            throw new SolveException(e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The TEM modes (see {@link TemSolver}) when TEM is among the families and the guide has two or
+     * more conductors, with the impedance's error estimated like a cutoff's from the coarser grid.
+     */
+    private static List<Mode> temModes(CrossSection section, TensorGrid grid, SolveSettings settings) {
+        if (!settings.families().contains(ModeFamily.TEM) || section.conductors().size() < 2) {
+            return List.of();
+        }
+        TemSolver.Result fine = TemSolver.solve(section, CutCells.of(section, grid), settings.threads());
+        TemSolver.Result coarse = null;
+        TensorGrid half = settings.estimateError() ? everySecondLine(grid) : null;
+        if (half != null) {
+            try {
+                coarse = TemSolver.solve(section, CutCells.of(section, half), settings.threads());
+            } catch (SolveException tooCoarse) {
+                coarse = null;
+            }
+        }
+        List<Mode> out = new ArrayList<>();
+        for (int m = 0; m < fine.impedances().length; m++) {
+            double z = fine.impedances()[m];
+            double err = coarse != null && m < coarse.impedances().length
+                    ? 2.0 * Math.abs(z - coarse.impedances()[m]) / (3.0 * z) : Double.NaN;
+            out.add(new Mode(ModeFamily.TEM, m + 1, 0.0, 0.0, fine.residuals()[m], err, fine.fields()[m], z));
+        }
+        return out;
     }
 
     /** The grid made of every second line of {@code grid}, or null if that would be too coarse. */
@@ -156,7 +200,7 @@ public final class ModeSolver {
     private static int cellsForTarget(CrossSection section, SolveSettings settings, SolveProgress progress) {
         SolveSettings pilot = new SolveSettings(settings.modeCount(), settings.families(), PILOT_CELLS, Double.NaN,
                 true, settings.threads());
-        ModeSet first = solveOnGrid(section, TensorGrid.fitted(section.bounds(), PILOT_CELLS), pilot,
+        ModeSet first = solveOnGrid(section, GridPlanner.plan(section, PILOT_CELLS), pilot,
                 (stage, f) -> progress.report("choosing the grid: " + stage, 0.0));
         double worst = first.modes().stream().mapToDouble(Mode::relativeErrorEstimate).max().orElse(Double.NaN);
         if (!(worst > 0)) {
@@ -182,17 +226,18 @@ public final class ModeSolver {
     public static List<Path> exportPencils(CrossSection section, SolveSettings settings, Path directory)
             throws IOException {
         Files.createDirectories(directory);
-        CutCells cells = CutCells.of(section, TensorGrid.fitted(section.bounds(), settings.cellsAcross()));
+        CutCells cells = CutCells.of(section, GridPlanner.plan(section, settings.cellsAcross()));
         List<Path> written = new ArrayList<>();
-        for (ModeFamily family : settings.families().stream().sorted().toList()) {
-            LatticePencil pencil = FamilySolver.pencil(family, cells);
+        PermittivityMap medium = medium(section, cells.grid());
+        for (ModeFamily family : settings.families().stream().filter(f -> f != ModeFamily.TEM).sorted().toList()) {
+            LatticePencil pencil = FamilySolver.pencil(family, cells, medium);
             String prefix = family.name().toLowerCase(Locale.ROOT);
             Path a = directory.resolve(prefix + "-stiffness.mtx");
             Path m = directory.resolve(prefix + "-mass.mtx");
             String where = "\ncross-section: " + section.name() + "\ngrid: " + settings.cellsAcross() + " cells across";
             try {
                 MatrixMarketWriter.writeSymmetric(a, pencil.stiffness(), "Sectio " + family
-                        + " stiffness matrix A of the pencil A x = lambda M x, lambda = kc^2 in rad^2/m^2" + where);
+                        + " stiffness matrix A of the pencil A x = lambda M x, lambda = k0^2 at cutoff (kc^2 for air) in rad^2/m^2" + where);
                 MatrixMarketWriter.writeDiagonal(m, pencil.mass(), "Sectio " + family
                         + " mass matrix M (diagonal, m^2) of the pencil A x = lambda M x" + where);
             } catch (java.io.UncheckedIOException e) {

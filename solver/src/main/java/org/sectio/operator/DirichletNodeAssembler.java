@@ -18,8 +18,22 @@ public final class DirichletNodeAssembler {
     private DirichletNodeAssembler() {
     }
 
-    /** @return the TM pencil; unknowns are the interior non-wall nodes, numbered row by row */
+    /** @return the TM pencil of an air-filled guide; unknowns are the interior non-wall nodes, row by row */
     public static LatticePencil assemble(NodeLinks links) {
+        return assemble(links, PermittivityMap.uniform(1.0));
+    }
+
+    /**
+     * The Ez pencil at cutoff of a guide with dielectrics (μr = 1): −∇²Ez = k0² εr Ez; the stiffness is
+     * the cut-link stencil above and the mass of a node is its dual-cell area times ⟨εr⟩ over the
+     * guide part of that cell ({@link PermittivityMap#nodeMean}). λ = k0², the free-space wavenumber
+     * at cutoff squared; for air λ = kc².
+     *
+     * @param links the cut-link data of the grid
+     * @param medium εr averaged on the same grid
+     * @return the pencil; unknowns are the interior non-wall nodes, numbered row by row
+     */
+    public static LatticePencil assemble(NodeLinks links, PermittivityMap medium) {
         TensorGrid grid = links.grid();
         double[] xs = grid.xLines();
         double[] ys = grid.yLines();
@@ -41,7 +55,7 @@ public final class DirichletNodeAssembler {
             double hUp = grid.yStep(j, +1);
             double dualWidth = 0.5 * (hLeft + hRight);
             double dualHeight = 0.5 * (hDown + hUp);
-            mass[k] = dualWidth * dualHeight;
+            mass[k] = dualWidth * dualHeight * medium.nodeMean(i, j);
             int kDown = links.unknownAt(i, j - 1);
             int kLeft = links.unknownAt(i - 1, j);
             int kRight = links.unknownAt(i + 1, j);

@@ -25,8 +25,21 @@ public final class NeumannCellAssembler {
     private NeumannCellAssembler() {
     }
 
-    /** @return the TE pencil of the cut grid; unknowns are the cells with open area */
+    /** @return the TE pencil of the cut grid of an air-filled guide; unknowns are the cells with open area */
     public static LatticePencil assemble(CutCells cells) {
+        return assemble(cells, PermittivityMap.uniform(1.0));
+    }
+
+    /**
+     * The Hz pencil at cutoff of a guide with dielectrics (μr = 1): −∇·(εr⁻¹ ∇Hz) = k0² Hz, each face
+     * weight multiplied by the effective εr⁻¹ of its link ({@link PermittivityMap}); the mass stays the
+     * open cell area. λ = k0², the free-space wavenumber at cutoff squared; for air λ = kc².
+     *
+     * @param cells the cut grid
+     * @param medium εr averaged on the same grid
+     * @return the pencil; unknowns are the cells with open area
+     */
+    public static LatticePencil assemble(CutCells cells, PermittivityMap medium) {
         TensorGrid grid = cells.grid();
         int nx = grid.cellsX();
         int ny = grid.cellsY();
@@ -53,10 +66,14 @@ public final class NeumannCellAssembler {
                 column[k] = i;
                 row[k] = j;
                 mass[k] = cells.cellArea(i, j);
-                double down = j > 0 ? cells.horizontalFaceOpenLength(i, j) / centreDistance(ys, j) : 0;
-                double left = i > 0 ? cells.verticalFaceOpenLength(i, j) / centreDistance(xs, i) : 0;
-                double right = i + 1 < nx ? cells.verticalFaceOpenLength(i + 1, j) / centreDistance(xs, i + 1) : 0;
-                double up = j + 1 < ny ? cells.horizontalFaceOpenLength(i, j + 1) / centreDistance(ys, j + 1) : 0;
+                double down = j > 0 ? cells.horizontalFaceOpenLength(i, j) / centreDistance(ys, j)
+                        * medium.horizontalFaceInverse(i, j) : 0;
+                double left = i > 0 ? cells.verticalFaceOpenLength(i, j) / centreDistance(xs, i)
+                        * medium.verticalFaceInverse(i, j) : 0;
+                double right = i + 1 < nx ? cells.verticalFaceOpenLength(i + 1, j) / centreDistance(xs, i + 1)
+                        * medium.verticalFaceInverse(i + 1, j) : 0;
+                double up = j + 1 < ny ? cells.horizontalFaceOpenLength(i, j + 1) / centreDistance(ys, j + 1)
+                        * medium.horizontalFaceInverse(i, j + 1) : 0;
                 int kDown = j > 0 ? unknownOf[(j - 1) * nx + i] : -1;
                 int kLeft = i > 0 ? unknownOf[j * nx + i - 1] : -1;
                 int kRight = i + 1 < nx ? unknownOf[j * nx + i + 1] : -1;

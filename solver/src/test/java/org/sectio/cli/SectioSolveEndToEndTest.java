@@ -64,7 +64,8 @@ class SectioSolveEndToEndTest {
         assertEquals(0, run.exitCode(), run.err());
         assertEquals("", run.out());
         List<String> lines = Files.readAllLines(table);
-        assertEquals("number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,relative_error_estimate,residual",
+        assertEquals("number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,relative_error_estimate,residual,"
+                + "characteristic_impedance_ohm",
                 lines.get(0));
         assertEquals(5, lines.size());
     }

@@ -17,6 +17,8 @@ import java.util.Set;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.sectio.modes.Mode;
+import org.sectio.modes.ModeFamily;
 import org.sectio.modes.ModeSet;
 
 class ModeTableWriterTest {
@@ -29,7 +31,8 @@ class ModeTableWriterTest {
     @Test
     void csvStartsWithTheExactHeaderOfSiColumnNames() {
         String[] lines = ModeTableWriter.format(modes, TableFormat.CSV).split("\n");
-        assertEquals("number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,relative_error_estimate,residual",
+        assertEquals("number,family,index,cutoff_frequency_hz,cutoff_wavenumber_per_m,relative_error_estimate,residual,"
+                + "characteristic_impedance_ohm",
                 lines[0]);
         assertEquals(4, lines.length);
     }
@@ -50,8 +53,35 @@ class ModeTableWriterTest {
     @Test
     void csvLeavesTheEstimateFieldEmptyWhenNoEstimateWasMade() {
         String[] fields = ModeTableWriter.format(modes, TableFormat.CSV).split("\n")[2].split(",", -1);
-        assertEquals(7, fields.length);
+        assertEquals(8, fields.length);
         assertEquals("", fields[5]);
+        assertEquals("", fields[7], "a TE mode has no characteristic impedance");
+    }
+
+    /** A coaxial line's TEM mode in front of the rectangle's modes: zero cutoff, impedance in Ω. */
+    private static ModeSet withTem() {
+        ModeSet rect = SampleModes.rectangleModes();
+        java.util.List<Mode> all = new java.util.ArrayList<>(rect.modes());
+        all.add(new Mode(ModeFamily.TEM, 1, 0.0, 0.0, 1e-14, 2e-5, SampleModes.smallField(), 41.58883083359672));
+        return new ModeSet(rect.sectionName(), all, rect.grid(), rect.timing());
+    }
+
+    @Test
+    void aTemModeComesFirstWithZeroCutoffAndItsImpedanceInEveryFormat() throws IOException {
+        ModeSet tem = withTem();
+        String[] csv = ModeTableWriter.format(tem, TableFormat.CSV).split("\n")[1].split(",", -1);
+        assertArrayEquals(new String[] {"1", "TEM", "1", "0", "0"}, java.util.Arrays.copyOf(csv, 5));
+        assertEquals(41.58883083359672, Double.parseDouble(csv[7]), 0.0);
+        JsonNode first = new ObjectMapper().readTree(ModeTableWriter.format(tem, TableFormat.JSON)).get("modes").get(0);
+        assertEquals("TEM", first.get("family").asText());
+        assertEquals(0.0, first.get("cutoff_frequency_hz").asDouble(), 0.0);
+        assertEquals(41.58883083359672, first.get("characteristic_impedance_ohm").asDouble(), 0.0);
+        JsonNode second = new ObjectMapper().readTree(ModeTableWriter.format(tem, TableFormat.JSON)).get("modes").get(1);
+        assertTrue(second.get("characteristic_impedance_ohm").isNull());
+        String[] table = ModeTableWriter.format(tem, TableFormat.TABLE).split("\n");
+        assertEquals("  #  family  index    cutoff (GHz)      kc (rad/m)  rel. error   residual    Z0 (ohm)", table[2]);
+        assertEquals("  1  TEM         1               0               0     2.0e-05    1.0e-14     41.5888", table[3]);
+        assertEquals("  2  TE          1       6.5571404      137.427500     2.5e-06    3.5e-13           -", table[4]);
     }
 
     @Test

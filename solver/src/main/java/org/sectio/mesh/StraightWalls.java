@@ -1,0 +1,54 @@
+package org.sectio.mesh;
+
+import java.util.List;
+import java.util.TreeSet;
+import org.sectio.geometry.CrossSection;
+import org.sectio.geometry.WallPiece;
+
+/**
+ * The coordinates of the axis-aligned straight walls of a cross-section: the x of every vertical
+ * segment and the y of every horizontal one. A grid line placed exactly on such a wall leaves no
+ * sliver cells along it.
+ *
+ * <p>Why the midpoint test: the solver sees walls only as {@link WallPiece}s. A monotone piece whose
+ * ends share an x and whose midpoint has that x too is a vertical segment (a monotone arc cannot do
+ * this: its x varies strictly between its ends or it is a single point).
+ */
+public final class StraightWalls {
+
+    private StraightWalls() {
+    }
+
+    /** @return the x, m, of every vertical straight wall, ascending, without repeats */
+    public static double[] verticalXs(CrossSection section) {
+        TreeSet<Double> xs = new TreeSet<>();
+        for (WallPiece p : section.wallPieces()) {
+            double mid = 0.5 * (p.startParameter() + p.endParameter());
+            if (p.startX() == p.endX() && p.x(mid) == p.startX() && p.startY() != p.endY()) {
+                xs.add(p.startX());
+            }
+        }
+        return unboxed(xs);
+    }
+
+    /** @return the y, m, of every horizontal straight wall, ascending, without repeats */
+    public static double[] horizontalYs(CrossSection section) {
+        TreeSet<Double> ys = new TreeSet<>();
+        for (WallPiece p : section.wallPieces()) {
+            double mid = 0.5 * (p.startParameter() + p.endParameter());
+            if (p.startY() == p.endY() && p.y(mid) == p.startY() && p.startX() != p.endX()) {
+                ys.add(p.startY());
+            }
+        }
+        return unboxed(ys);
+    }
+
+    private static double[] unboxed(TreeSet<Double> values) {
+        List<Double> list = List.copyOf(values);
+        double[] out = new double[list.size()];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = list.get(k);
+        }
+        return out;
+    }
+}
