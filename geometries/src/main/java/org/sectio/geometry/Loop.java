@@ -3,8 +3,10 @@ package org.sectio.geometry;
 import java.util.List;
 
 /**
- * One closed boundary: monotone pieces, each starting where the previous one ends, the last ending
- * where the first starts. Its orientation says which side is inside: counter-clockwise (positive
+ * One closed boundary: monotone pieces, each starting exactly (bit for bit) where the previous one
+ * ends, the last ending where the first starts. Exactness matters: the crossing rule of
+ * {@link WallCrossings} counts a grid line through a vertex once only if both pieces report the same
+ * vertex. Its orientation says which side is inside: counter-clockwise (positive
  * {@link #signedArea()}) encloses its interior, clockwise marks a hole.
  *
  * @param pieces the pieces in order, at least one
@@ -16,11 +18,10 @@ public record Loop(List<WallPiece> pieces) {
             throw new IllegalArgumentException("a loop needs at least one piece");
         }
         pieces = List.copyOf(pieces);
-        double size = Math.max(WallCrossings.bounds(pieces).width(), WallCrossings.bounds(pieces).height());
         for (int k = 0; k < pieces.size(); k++) {
             WallPiece a = pieces.get(k);
             WallPiece b = pieces.get((k + 1) % pieces.size());
-            if (Math.hypot(a.endX() - b.startX(), a.endY() - b.startY()) > 1e-12 * size) {
+            if (a.endX() != b.startX() || a.endY() != b.startY()) {
                 throw new IllegalArgumentException("loop is open: piece " + k + " ends at (" + a.endX() + ", " + a.endY()
                         + ") m but the next starts at (" + b.startX() + ", " + b.startY() + ") m");
             }

@@ -144,9 +144,13 @@ public final class Outline {
 
     /** A full circle of the given centre and radius, as a counter-clockwise loop of four quadrant arcs. */
     static List<WallPiece> circle(double centreX, double centreY, double radius) {
+        // the four axis points once, exactly: neighbouring quarters must share their end points bit for bit
+        double[] xs = {centreX + radius, centreX, centreX - radius, centreX, centreX + radius};
+        double[] ys = {centreY, centreY + radius, centreY, centreY - radius, centreY};
         List<WallPiece> quarters = new ArrayList<>();
         for (int q = 0; q < 4; q++) {
-            quarters.add(ArcPiece.of(centreX, centreY, radius, q * 0.5 * Math.PI, (q + 1) * 0.5 * Math.PI));
+            quarters.add(new ArcPiece(centreX, centreY, radius, q * 0.5 * Math.PI, (q + 1) * 0.5 * Math.PI,
+                    xs[q], ys[q], xs[q + 1], ys[q + 1]));
         }
         return List.copyOf(quarters);
     }
@@ -183,8 +187,8 @@ public final class Outline {
             double boundary = k * quarter;
             boolean last = direction > 0 ? boundary >= a1 - 1e-12 : boundary <= a1 + 1e-12;
             double to = last ? a1 : boundary;
-            double toX = last ? x1 : cx + r * Math.cos(to);
-            double toY = last ? y1 : cy + r * Math.sin(to);
+            double toX = last ? x1 : quadrantPointX(cx, r, k);
+            double toY = last ? y1 : quadrantPointY(cy, r, k);
             pieces.add(new ArcPiece(cx, cy, r, from, to, fromX, fromY, toX, toY));
             if (last) {
                 return;
@@ -193,6 +197,18 @@ public final class Outline {
             fromX = toX;
             fromY = toY;
         }
+    }
+
+    /** x of the circle point at angle k·π/2, exact (cos of a multiple of π/2 is not, in floating point). */
+    private static double quadrantPointX(double cx, double r, double k) {
+        int q = Math.floorMod((int) Math.round(k), 4);
+        return q == 0 ? cx + r : q == 2 ? cx - r : cx;
+    }
+
+    /** y of the circle point at angle k·π/2, exact. */
+    private static double quadrantPointY(double cy, double r, double k) {
+        int q = Math.floorMod((int) Math.round(k), 4);
+        return q == 1 ? cy + r : q == 3 ? cy - r : cy;
     }
 
     private static void requireFinite(String what, double x, double y) {
