@@ -142,7 +142,11 @@ final class FamilySolver {
         }
     }
 
-    /** Puts an eigenvector on the grid's cell centres (TE) or nodes (TM), scaled to a peak of +1. */
+    /**
+     * Puts an eigenvector on the grid's cell centres (TE) or nodes (TM, TEM), scaled to a peak of +1, with
+     * each sample's weight in the discrete mass: the open cell area (TE, the pencil's M) or the dual-cell
+     * area (TM, TEM: M without the ⟨εr⟩ factor), 0 outside.
+     */
     static FieldMap fieldOf(ModeFamily family, TensorGrid grid, LatticePencil pencil, double[] vector) {
         double[] xs;
         double[] ys;
@@ -163,10 +167,16 @@ final class FamilySolver {
         }
         int[] column = pencil.column();
         int[] row = pencil.row();
+        double[] weights = new double[values.length];
+        double[] mass = pencil.mass();
         for (int k = 0; k < vector.length; k++) {
-            values[row[k] * xs.length + column[k]] = vector[k] / peak;
+            int at = row[k] * xs.length + column[k];
+            values[at] = vector[k] / peak;
+            weights[at] = family == ModeFamily.TE ? mass[k]
+                    : 0.25 * (grid.xStep(column[k], -1) + grid.xStep(column[k], +1))
+                            * (grid.yStep(row[k], -1) + grid.yStep(row[k], +1));
         }
-        return new FieldMap(xs, ys, values);
+        return new FieldMap(xs, ys, values, weights);
     }
 
     private static double[] centres(double[] lines) {

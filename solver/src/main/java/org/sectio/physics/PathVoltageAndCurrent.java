@@ -1,0 +1,108 @@
+package org.sectio.physics;
+
+import org.sectio.geometry.CrossSection;
+import org.sectio.modes.ModeFamily;
+import org.sectio.physics.PotentialSamples.Constraint;
+
+/**
+ * The geometric parts of a mode's voltage and current, before the frequency-dependent factors that
+ * {@link ModeAnalysis} applies.
+ *
+ * <p>Voltage: the path is walked in steps of one local grid step with the 4-point Gauss–Legendre rule,
+ * ∇ψ rebuilt at each point ({@link PotentialSamples}); {@code voltage} is ∫ (∇ψ × ẑ) · dℓ for TE (whose
+ * E_t is along ∇Hz × ẑ) and ∫ ∇ψ · dℓ for TM and TEM.
+ *
+ * <p>Current: the longitudinal surface current J_z = ẑ · (n̂ × H), n̂ the normal out of the metal, is
+ * −H_t · t̂ along a wall walked with the interior on the left. The conductor is the one whose wall lies
+ * nearest to the path's end, and the current is the part of it that flows the same way as at the path's
+ * end: I = s ∮ max(0, s J_z) dℓ, s = sign J_z at the end. On a conductor carrying a net current of one
+ * sign (the inner conductor of a coaxial line in TEM) that is the whole current; on the single wall of
+ * a hollow guide, whose net current is zero, it is the current of the half that the path ends on — for
+ * TE10 of a rectangle the current of the broad wall (side-wall J_z is zero). {@code current} is that
+ * integral of the geometric J_z: −∂ψ/∂t (TE, H_t along ∇Hz), +∂ψ/∂n_in (TM, H_t along ẑ × ∇Ez) and
+ * −∂φ/∂n_in (TEM, H_t along −ẑ × ∇φ).
+ *
+ * @param voltage the geometric voltage integral, units of ψ
+ * @param current the geometric current integral, units of ψ
+ */
+record PathVoltageAndCurrent(double voltage, double current) {
+
+    private static final double[] NODES = {-0.8611363115940526, -0.3399810435848563, 0.3399810435848563,
+        0.8611363115940526};
+    private static final double[] WEIGHTS = {0.3478548451374538, 0.6521451548625461, 0.6521451548625461,
+        0.3478548451374538};
+
+    /**
+     * @param section the cross-section
+     * @param samples the mode's samples
+     * @param integrals the mode's wall data
+     * @param path the voltage path, inside the guide
+     * @return the geometric voltage and current
+     */
+    static PathVoltageAndCurrent of(CrossSection section, PotentialSamples samples, ModeFieldIntegrals integrals,
+                                    VoltagePath path) {
+        path.requireInside(section);
+        ModeFamily family = samples.family();
+        double length = path.length();
+        double dx = (path.x2() - path.x1()) / length;
+        double dy = (path.y2() - path.y1()) / length;
+        double voltage = 0;
+        double s = 0;
+        while (s < length) {
+            double h = samples.localStep(path.x1() + s * dx, path.y1() + s * dy);
+            double next = Math.min(length, s + h);
+            if (length - next < 0.2 * h) {
+                next = length;
+            }
+            double mid = 0.5 * (s + next);
+            double half = 0.5 * (next - s);
+            for (int g = 0; g < NODES.length; g++) {
+                double at = mid + half * NODES[g];
+                samples.fit(path.x1() + at * dx, path.y1() + at * dy, 1, 0, Constraint.NONE);
+                double integrand = family == ModeFamily.TE
+                        ? samples.gradientY * dx - samples.gradientX * dy
+                        : samples.gradientX * dx + samples.gradientY * dy;
+                voltage += integrand * WEIGHTS[g] * half;
+            }
+            s = next;
+        }
+        return new PathVoltageAndCurrent(voltage, current(family, integrals, path));
+    }
+
+    private static double current(ModeFamily family, ModeFieldIntegrals integrals, VoltagePath path) {
+        WallPoints walls = integrals.walls();
+        double[] x = walls.x();
+        double[] y = walls.y();
+        double[] dl = walls.length();
+        int[] owner = walls.conductor();
+        double[] tangential = integrals.wallTangential();
+        double[] normal = integrals.wallNormal();
+        int nearest = 0;
+        double closest = Double.POSITIVE_INFINITY;
+        for (int p = 0; p < walls.size(); p++) {
+            double d = Math.hypot(x[p] - path.x2(), y[p] - path.y2());
+            if (d < closest) {
+                closest = d;
+                nearest = p;
+            }
+        }
+        double end = density(family, tangential[nearest], normal[nearest]);
+        double sign = end < 0 ? -1 : 1;
+        double sum = 0;
+        for (int p = 0; p < walls.size(); p++) {
+            if (owner[p] == owner[nearest]) {
+                sum += Math.max(0, sign * density(family, tangential[p], normal[p])) * dl[p];
+            }
+        }
+        return sign * sum;
+    }
+
+    /** The geometric J_z at a wall point. */
+    private static double density(ModeFamily family, double tangential, double normal) {
+        return switch (family) {
+            case TE -> -tangential;
+            case TM -> normal;
+            case TEM -> -normal;
+        };
+    }
+}

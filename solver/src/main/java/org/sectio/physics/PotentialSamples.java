@@ -1,0 +1,352 @@
+package org.sectio.physics;
+
+import java.util.Arrays;
+import org.sectio.geometry.CrossSection;
+import org.sectio.modes.FieldMap;
+import org.sectio.modes.Mode;
+import org.sectio.modes.ModeFamily;
+
+/**
+ * The longitudinal potential ψ of a computed mode (Hz, Ez or the TEM potential) and its gradient at any
+ * point of the cross-section, rebuilt from the grid samples by a small weighted least-squares quadratic
+ * fit.
+ *
+ * <p>At a point p with a frame (t, n) — the wall tangent and the inward normal at a wall point, the axes
+ * elsewhere — ψ is fitted as c0 + c1 s + c2 r + c3 s² + c4 s r + c5 r² in the local coordinates
+ * s = (x − p)·t / h, r = (x − p)·n / h (h the local grid step) to the usable samples within a radius R
+ * (3 h, widened to 4.5 h and 6 h when fewer than 10 samples lie there), each weighted by
+ * (1 − d²/R²)². At a wall the boundary condition is built in: at p itself through the basis (TE,
+ * ∂Hz/∂n = 0: c2 dropped; TM, Ez = 0: c0 dropped; TEM: φ free), and at the neighbouring wall
+ * quadrature points of the same conductor within R as exact rows of the least-squares system
+ * (TE: ∂ψ/∂n_q = 0; TM and TEM: ψ(q) = ψ(p)), so the fit follows a curved wall; only samples on the
+ * inward side (r ≥ −h/4) are used, so that metal thinner than the fit radius does not couple fields
+ * across it. A quadratic fit of a smooth ψ leaves O(h³) in ψ and O(h²) in ∇ψ. Measured (tests in
+ * {@code org.sectio.physics.ModeAnalysis*Test}): TE wall values and tangential derivatives converge at
+ * order 2 (α_c of WR-90 TE10, circular TE11 and TE01), the TEM normal derivative at order 2 (coaxial
+ * α_c); the TM normal derivative only at order 1 on curved walls (circular TM01: 5.5e-3, 3.2e-3, 1.6e-3
+ * at 50, 100, 200 cells), because the nodal Ez of the cut-link stencil next to a curved wall carries an
+ * error that varies from node to node with the cut fraction. Usable samples are the finite samples with
+ * positive weight whose point lies inside the guide (for TE a cut cell's centre may lie in the metal;
+ * that sample is not used).
+ *
+ * <p>Not thread-safe: one instance holds its work arrays, so fitting allocates nothing.
+ */
+final class PotentialSamples {
+
+    /** Basis index of the normal-derivative term (dropped for a Neumann wall). */
+    private static final int NORMAL_TERM = 2;
+    /** Basis index of the constant term (dropped for a Dirichlet wall). */
+    private static final int CONSTANT_TERM = 0;
+    private static final int MIN_SAMPLES = 10;
+    private static final double[] RADII = {3.0, 4.5, 6.0};
+
+    /** How the fit treats the point. */
+    enum Constraint {
+        /** No condition: a point inside the guide, or a TEM conductor of unknown potential. */
+        NONE,
+        /** ∂ψ/∂n = 0 at the point (TE wall). */
+        ZERO_NORMAL_DERIVATIVE,
+        /** ψ = 0 at the point (TM wall). */
+        ZERO_VALUE,
+        /** ψ takes one unknown value along the conductor (TEM wall). */
+        CONSTANT_ON_WALL
+    }
+
+    private final double[] xs;
+    private final double[] ys;
+    private final double[] values;
+    private final double[] weights;
+    private final boolean[] usable;
+    private final ModeFamily family;
+
+    private WallPoints walls;
+    private final double[] gram = new double[36];
+    private final double[] rhs = new double[6];
+    private final double[] basis = new double[6];
+    private final int[] active = new int[6];
+
+    /** ψ at the last fitted point. */
+    double value;
+    /** ∂ψ/∂x at the last fitted point, 1/m times the units of ψ. */
+    double gradientX;
+    /** ∂ψ/∂y at the last fitted point. */
+    double gradientY;
+
+    /**
+     * @param section the cross-section the mode was solved on
+     * @param mode a mode whose field map carries sample weights
+     * @throws IllegalArgumentException if the field map has no weights
+     */
+    PotentialSamples(CrossSection section, Mode mode) {
+        FieldMap map = mode.field();
+        if (!map.hasWeights()) {
+            throw new IllegalArgumentException("mode " + mode.label() + ": its field map carries no sample weights;"
+                    + " field-based quantities need a mode from ModeSolver");
+        }
+        family = mode.family();
+        xs = map.xCoordinates();
+        ys = map.yCoordinates();
+        values = map.values();
+        weights = map.weights();
+        usable = new boolean[values.length];
+        for (int j = 0; j < ys.length; j++) {
+            for (int i = 0; i < xs.length; i++) {
+                int k = j * xs.length + i;
+                usable[k] = Double.isFinite(values[k]) && weights[k] > 0 && section.contains(xs[i], ys[j]);
+            }
+        }
+    }
+
+    /**
+     * Lets wall fits use the boundary condition at the neighbouring wall points as well.
+     *
+     * @param points the wall quadrature points of the cross-section
+     */
+    void useWalls(WallPoints points) {
+        walls = points;
+    }
+
+    /** @return the family of the mode */
+    ModeFamily family() {
+        return family;
+    }
+
+    /** @return Σ w ψ² over the samples: the discrete ∫ ψ² dA, m² */
+    double massNorm() {
+        double sum = 0;
+        for (int k = 0; k < values.length; k++) {
+            if (weights[k] > 0 && Double.isFinite(values[k])) {
+                sum += weights[k] * values[k] * values[k];
+            }
+        }
+        return sum;
+    }
+
+    /** @return the number of sample points */
+    int sampleCount() {
+        return values.length;
+    }
+
+    /** @return whether sample k (row-major) is used by the fits */
+    boolean isUsable(int k) {
+        return usable[k];
+    }
+
+    /** @return x of sample k, m */
+    double sampleX(int k) {
+        return xs[k % xs.length];
+    }
+
+    /** @return y of sample k, m */
+    double sampleY(int k) {
+        return ys[k / xs.length];
+    }
+
+    /** @return the local grid step at (x, y): the larger sample spacing of the column and row there, m */
+    double localStep(double x, double y) {
+        return Math.max(spacing(xs, x), spacing(ys, y));
+    }
+
+    private static double spacing(double[] lines, double v) {
+        int at = Arrays.binarySearch(lines, v);
+        int k = at >= 0 ? at : -at - 2;
+        k = Math.max(0, Math.min(lines.length - 2, k));
+        return lines[k + 1] - lines[k];
+    }
+
+    /**
+     * Fits ψ at (x, y) in the frame (tx, ty) / inward normal (−ty, tx) and sets {@link #value},
+     * {@link #gradientX}, {@link #gradientY}.
+     *
+     * @param x the point, m
+     * @param y the point, m
+     * @param tx unit tangent x (1 away from walls)
+     * @param ty unit tangent y (0 away from walls)
+     * @param constraint the boundary condition at the point
+     * @throws IllegalStateException if fewer than 10 usable samples lie within 6 h of the point
+     */
+    void fit(double x, double y, double tx, double ty, Constraint constraint) {
+        fit(x, y, tx, ty, constraint, -1);
+    }
+
+    /**
+     * As {@link #fit(double, double, double, double, Constraint)}, at a wall point of the given conductor:
+     * the boundary condition at the other wall points of that conductor within the fit radius enters
+     * the fit as exact data (∂ψ/∂n = 0 for TE, ψ = ψ(p) for TM and TEM).
+     */
+    void fit(double x, double y, double tx, double ty, Constraint constraint, int conductor) {
+        double nx = -ty;
+        double ny = tx;
+        int count = 0;
+        for (int b = 0; b < 6; b++) {
+            boolean dropped = (constraint == Constraint.ZERO_NORMAL_DERIVATIVE && b == NORMAL_TERM)
+                    || (constraint == Constraint.ZERO_VALUE && b == CONSTANT_TERM);
+            if (!dropped) {
+                active[count++] = b;
+            }
+        }
+        double h = localStep(x, y);
+        boolean wall = constraint != Constraint.NONE;
+        for (double radiusInSteps : RADII) {
+            double radius = radiusInSteps * h;
+            if (accumulate(x, y, tx, ty, nx, ny, h, radius, wall, count) >= MIN_SAMPLES) {
+                if (conductor >= 0 && walls != null) {
+                    accumulateWall(x, y, tx, ty, nx, ny, h, radius, constraint, count, conductor);
+                }
+                double[] c = solve(count);
+                double c0 = constraint == Constraint.ZERO_VALUE ? 0 : c[0];
+                double cs = c[constraint == Constraint.ZERO_VALUE ? 0 : 1] / h;
+                double cr = constraint == Constraint.ZERO_NORMAL_DERIVATIVE ? 0
+                        : c[constraint == Constraint.ZERO_VALUE ? 1 : 2] / h;
+                value = c0;
+                gradientX = cs * tx + cr * nx;
+                gradientY = cs * ty + cr * ny;
+                return;
+            }
+        }
+        throw new IllegalStateException(String.format(java.util.Locale.ROOT,
+                "too few field samples near (%.6g, %.6g) m to rebuild the %s field there; use a finer grid",
+                x, y, family));
+    }
+
+    /** Builds the normal equations over the samples within {@code radius}; returns how many were used. */
+    private int accumulate(double x, double y, double tx, double ty, double nx, double ny, double h, double radius,
+                           boolean wall, int count) {
+        Arrays.fill(gram, 0, count * count, 0.0);
+        Arrays.fill(rhs, 0, count, 0.0);
+        int i0 = Math.max(0, lowerIndex(xs, x - radius));
+        int i1 = Math.min(xs.length - 1, upperIndex(xs, x + radius));
+        int j0 = Math.max(0, lowerIndex(ys, y - radius));
+        int j1 = Math.min(ys.length - 1, upperIndex(ys, y + radius));
+        double r2max = radius * radius;
+        int used = 0;
+        for (int j = j0; j <= j1; j++) {
+            double dy = ys[j] - y;
+            for (int i = i0; i <= i1; i++) {
+                int k = j * xs.length + i;
+                double dx = xs[i] - x;
+                double d2 = dx * dx + dy * dy;
+                if (!usable[k] || d2 > r2max) {
+                    continue;
+                }
+                double s = (dx * tx + dy * ty) / h;
+                double r = (dx * nx + dy * ny) / h;
+                if (wall && r < -0.25) {
+                    continue;
+                }
+                double q = 1 - d2 / r2max;
+                double w = q * q;
+                basis[0] = 1;
+                basis[1] = s;
+                basis[2] = r;
+                basis[3] = s * s;
+                basis[4] = s * r;
+                basis[5] = r * r;
+                for (int a = 0; a < count; a++) {
+                    double wa = w * basis[active[a]];
+                    rhs[a] += wa * values[k];
+                    for (int b = 0; b <= a; b++) {
+                        gram[a * count + b] += wa * basis[active[b]];
+                    }
+                }
+                used++;
+            }
+        }
+        return used;
+    }
+
+    /** Adds the boundary condition at the wall points of one conductor within {@code radius}. */
+    private void accumulateWall(double x, double y, double tx, double ty, double nx, double ny, double h,
+                                double radius, Constraint constraint, int count, int conductor) {
+        double[] wx = walls.x();
+        double[] wy = walls.y();
+        double[] wtx = walls.tangentX();
+        double[] wty = walls.tangentY();
+        int[] owner = walls.conductor();
+        double r2max = radius * radius;
+        for (int q = 0; q < wx.length; q++) {
+            double dx = wx[q] - x;
+            double dy = wy[q] - y;
+            double d2 = dx * dx + dy * dy;
+            if (owner[q] != conductor || d2 > r2max || d2 < 1e-12 * h * h) {
+                continue;
+            }
+            double s = (dx * tx + dy * ty) / h;
+            double r = (dx * nx + dy * ny) / h;
+            if (constraint == Constraint.ZERO_NORMAL_DERIVATIVE) {
+                // the normal of q in the frame of p: ∂/∂n_q = (n_q·t) ∂/∂s + (n_q·n) ∂/∂r
+                double qnx = -wty[q];
+                double qny = wtx[q];
+                double ns = qnx * tx + qny * ty;
+                double nr = qnx * nx + qny * ny;
+                basis[0] = 0;
+                basis[1] = ns;
+                basis[2] = nr;
+                basis[3] = 2 * s * ns;
+                basis[4] = r * ns + s * nr;
+                basis[5] = 2 * r * nr;
+            } else {
+                basis[0] = 0;
+                basis[1] = s;
+                basis[2] = r;
+                basis[3] = s * s;
+                basis[4] = s * r;
+                basis[5] = r * r;
+            }
+            double qw = 1 - d2 / r2max;
+            double w = qw * qw;
+            for (int a = 0; a < count; a++) {
+                double wa = w * basis[active[a]];
+                for (int b = 0; b <= a; b++) {
+                    gram[a * count + b] += wa * basis[active[b]];
+                }
+            }
+        }
+    }
+
+    /** Solves the normal equations (lower triangle stored) by Cholesky, in place; returns the coefficients. */
+    private double[] solve(int count) {
+        for (int a = 0; a < count; a++) {
+            for (int b = 0; b <= a; b++) {
+                double sum = gram[a * count + b];
+                for (int c = 0; c < b; c++) {
+                    sum -= gram[a * count + c] * gram[b * count + c];
+                }
+                if (a == b) {
+                    if (!(sum > 1e-12 * Math.abs(gram[a * count + a]) + 1e-300)) {
+                        throw new IllegalStateException("the field samples near a point are too few or aligned to"
+                                + " fit the " + family + " field; use a finer grid");
+                    }
+                    gram[a * count + a] = Math.sqrt(sum);
+                } else {
+                    gram[a * count + b] = sum / gram[b * count + b];
+                }
+            }
+        }
+        for (int a = 0; a < count; a++) {
+            double sum = rhs[a];
+            for (int c = 0; c < a; c++) {
+                sum -= gram[a * count + c] * rhs[c];
+            }
+            rhs[a] = sum / gram[a * count + a];
+        }
+        for (int a = count - 1; a >= 0; a--) {
+            double sum = rhs[a];
+            for (int c = a + 1; c < count; c++) {
+                sum -= gram[c * count + a] * rhs[c];
+            }
+            rhs[a] = sum / gram[a * count + a];
+        }
+        return rhs;
+    }
+
+    private static int lowerIndex(double[] lines, double v) {
+        int at = Arrays.binarySearch(lines, v);
+        return at >= 0 ? at : -at - 1;
+    }
+
+    private static int upperIndex(double[] lines, double v) {
+        int at = Arrays.binarySearch(lines, v);
+        return at >= 0 ? at : -at - 2;
+    }
+}
