@@ -15,6 +15,9 @@ import org.ejml.data.DMatrixSparseCSC;
  * "The multifrontal method for sparse matrix solution: theory and practice", SIAM Review 34 (1992)
  * 82–109). For lattice-neighbour couplings every later unknown reached this way lies on an ancestor
  * separator, so the dissection tree is an assembly tree without a general symbolic factorization.
+ * Neighbours are the eight lattice points around a point (|Δcolumn| ≤ 1 and |Δrow| ≤ 1): 5-point
+ * and 9-point stencils. A diagonal coupling cannot jump over a lattice line either, so a separator
+ * line still disconnects the two halves (George 1973 dissects the 9-point finite-element mesh).
  *
  * <p>Instances are immutable and may be shared between threads.
  */
@@ -176,7 +179,8 @@ public final class MultifrontalAnalysis {
      *
      * @param pattern square sparse matrix in full symmetric storage (both triangles); only its
      *     pattern is read; an entry {@code (k, l)}, {@code k ≠ l}, may exist only if unknowns
-     *     {@code k} and {@code l} are lattice neighbours ({@code |Δcolumn| + |Δrow| = 1})
+     *     {@code k} and {@code l} are lattice neighbours ({@code max(|Δcolumn|, |Δrow|) = 1}: the
+     *     four edge neighbours of a 5-point stencil and the four diagonal ones of a 9-point stencil)
      * @param column lattice column of every unknown
      * @param row lattice row of every unknown (points distinct)
      * @return the reusable symbolic analysis
@@ -289,7 +293,7 @@ public final class MultifrontalAnalysis {
         for (int k = 0; k < size; k++) {
             for (int idx = patternColumns[k]; idx < patternColumns[k + 1]; idx++) {
                 int l = patternRows[idx];
-                if (l != k && Math.abs(column[k] - column[l]) + Math.abs(row[k] - row[l]) != 1) {
+                if (l != k && Math.max(Math.abs(column[k] - column[l]), Math.abs(row[k] - row[l])) != 1) {
                     throw new IllegalArgumentException("multifrontal analysis: entry (" + l + ", " + k
                             + ") couples lattice points (" + column[l] + ", " + row[l] + ") and (" + column[k] + ", "
                             + row[k] + "), which are not neighbours");

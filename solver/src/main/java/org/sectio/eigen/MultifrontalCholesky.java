@@ -6,7 +6,7 @@ import org.ejml.data.DMatrixSparseCSC;
 
 /**
  * Supernodal (multifrontal) Cholesky factorization {@code P A Pᵀ = L Lᵀ} of a sparse symmetric
- * positive definite lattice matrix (5-point couplings), with {@code P} the nested-dissection order
+ * positive definite lattice matrix (5- or 9-point couplings), with {@code P} the nested-dissection order
  * of {@link NestedDissection} and one dense front per dissection node (Duff and Reid, ACM TOMS 9
  * (1983) 302–325; Liu, SIAM Review 34 (1992) 82–109). The factor is immutable; {@link #solve} keeps
  * all working storage local and may be called from several threads at once.

@@ -4,13 +4,14 @@ import java.util.Arrays;
 
 /**
  * Nested-dissection elimination order for unknowns that sit on distinct points of a 2-D integer
- * lattice and couple only to their lattice neighbours (5-point stencil), after A. George, "Nested
+ * lattice and couple only to their lattice neighbours (5-point or 9-point stencil), after A. George, "Nested
  * dissection of a regular finite element mesh", SIAM J. Numer. Anal. 10 (1973) 345–363.
  *
  * <p>The tight bounding box of the unknowns is cut across its longer side at the middle lattice
  * line; the unknowns on that line form the separator, which is eliminated after both halves. The
  * halves are dissected recursively until a box holds at most {@link #DEFAULT_LEAF_SIZE} unknowns.
- * Because a 5-point coupling never jumps over a lattice line, the separator disconnects the halves.
+ * Because neither a 5-point nor a diagonal (9-point) coupling jumps over a lattice line, the separator
+ * disconnects the halves.
  * Clipped regions (discs, holes) give empty separators or unbalanced halves, which are allowed.
  */
 public final class NestedDissection {

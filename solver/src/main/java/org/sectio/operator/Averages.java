@@ -102,6 +102,28 @@ final class Averages {
         return out;
     }
 
+    /**
+     * The off-diagonal entry of the smoothed tensor a = ⟨εr⁻¹⟩ I + (1/⟨εr⟩ − ⟨εr⁻¹⟩) n nᵀ (see
+     * {@link PermittivityMap}): a_xy = n_x n_y (1/⟨εr⟩ − ⟨εr⁻¹⟩) ≤ 0 in the sign of n_x n_y. A cell of one
+     * material, or one whose interface normals cancel, gets exactly 0.
+     *
+     * @return a_xy of every cell, row by row
+     */
+    double[] offDiagonalInverse() {
+        double[] out = new double[mean.length];
+        for (int c = 0; c < out.length; c++) {
+            double arithmetic = inverseMean[c];
+            if (Math.abs(mean[c] * arithmetic - 1.0) < 1e-12) {
+                continue;
+            }
+            double nx = normalX[c];
+            double ny = normalY[c];
+            double norm = nx * nx + ny * ny;
+            out[c] = norm > 0 ? nx * ny / norm * (1.0 / mean[c] - arithmetic) : 0.0;
+        }
+        return out;
+    }
+
     /** @return the grid averaged over */
     TensorGrid grid() {
         return grid;

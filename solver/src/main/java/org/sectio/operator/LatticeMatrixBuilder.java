@@ -3,9 +3,10 @@ package org.sectio.operator;
 import org.ejml.data.DMatrixSparseCSC;
 
 /**
- * Builds a symmetric 5-point lattice matrix column by column in compressed sparse column form. Unknowns
- * are numbered row by row, so the neighbours of a column come in the order down, left, self, right, up,
- * which is already the sorted row order CSC wants: no triplet sort is needed.
+ * Builds a symmetric 5-point or 9-point lattice matrix column by column in compressed sparse column
+ * form. Unknowns are numbered row by row, so the neighbours of a column come in the order down, left,
+ * self, right, up (with diagonal neighbours: down-left, down, down-right, left, self, right, up-left,
+ * up, up-right), which is already the sorted row order CSC wants: no triplet sort is needed.
  */
 final class LatticeMatrixBuilder {
 
@@ -15,10 +16,16 @@ final class LatticeMatrixBuilder {
     private int entries;
     private int column;
 
+    /** A builder for at most 5 entries per column (5-point stencil). */
     LatticeMatrixBuilder(int size) {
+        this(size, 5);
+    }
+
+    /** A builder for at most {@code perColumn} entries per column (5 or 9 for the lattice stencils). */
+    LatticeMatrixBuilder(int size, int perColumn) {
         columnStart = new int[size + 1];
-        rowIndex = new int[5 * size];
-        value = new double[5 * size];
+        rowIndex = new int[perColumn * size];
+        value = new double[perColumn * size];
     }
 
     /** Adds entry (row, current column); rows must come in ascending order within a column. */

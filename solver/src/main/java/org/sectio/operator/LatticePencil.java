@@ -4,8 +4,9 @@ import org.ejml.data.DMatrixSparseCSC;
 
 /**
  * A discrete scalar eigenproblem {@code A x = λ M x} whose unknowns sit on a 2-D lattice (grid cells
- * or grid nodes): A sparse symmetric positive semi-definite with a 5-point pattern (both triangles
- * stored), M diagonal and positive. λ = kc², rad²/m².
+ * or grid nodes): A sparse symmetric positive semi-definite with a 5-point pattern, or 9-point where
+ * a TE pencil crosses oblique or curved dielectric interfaces (both triangles stored), M diagonal and
+ * positive. λ = kc², rad²/m².
  *
  * @param stiffness A, m⁰ (dimensionless face-length ratios), n × n
  * @param mass the diagonal of M, m² (cell or dual-cell areas), length n

@@ -31,9 +31,13 @@ public final class NeumannCellAssembler {
     }
 
     /**
-     * The Hz pencil at cutoff of a guide with dielectrics (μr = 1): −∇·(εr⁻¹ ∇Hz) = k0² Hz, each face
-     * weight multiplied by the effective εr⁻¹ of its link ({@link PermittivityMap}); the mass stays the
-     * open cell area. λ = k0², the free-space wavenumber at cutoff squared; for air λ = kc².
+     * The Hz pencil at cutoff of a guide with dielectrics (μr = 1): −∇·(a ∇Hz) = k0² Hz with a the
+     * smoothed εr⁻¹ tensor of {@link PermittivityMap}. Each face weight is multiplied by the diagonal
+     * entry a_eff of its link; where an interface is oblique or curved the off-diagonal entry a_xy adds
+     * the node cross term of {@link MixedDerivativeCouplings}, which couples diagonal neighbours
+     * (9-point pattern; without it the scheme is only first order at a curved interface). Interfaces
+     * parallel to the axes and air give a_xy = 0 and the 5-point pencil. The mass stays the open cell
+     * area. λ = k0², the free-space wavenumber at cutoff squared; for air λ = kc².
      *
      * @param cells the cut grid
      * @param medium εr averaged on the same grid
@@ -53,10 +57,25 @@ public final class NeumannCellAssembler {
                 unknownOf[j * nx + i] = open ? n++ : -1;
             }
         }
+        double[] vertical = new double[(nx + 1) * ny];
+        double[] horizontal = new double[nx * (ny + 1)];
+        for (int j = 0; j < ny; j++) {
+            for (int i = 1; i < nx; i++) {
+                vertical[j * (nx + 1) + i] = cells.verticalFaceOpenLength(i, j) / centreDistance(xs, i)
+                        * medium.verticalFaceInverse(i, j);
+            }
+        }
+        for (int j = 1; j < ny; j++) {
+            for (int i = 0; i < nx; i++) {
+                horizontal[j * nx + i] = cells.horizontalFaceOpenLength(i, j) / centreDistance(ys, j)
+                        * medium.horizontalFaceInverse(i, j);
+            }
+        }
+        double[] cross = MixedDerivativeCouplings.of(cells, medium, unknownOf, vertical, horizontal);
         double[] mass = new double[n];
         int[] column = new int[n];
         int[] row = new int[n];
-        LatticeMatrixBuilder a = new LatticeMatrixBuilder(n);
+        LatticeMatrixBuilder a = new LatticeMatrixBuilder(n, cross == null ? 5 : 9);
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
                 int k = unknownOf[j * nx + i];
@@ -66,22 +85,29 @@ public final class NeumannCellAssembler {
                 column[k] = i;
                 row[k] = j;
                 mass[k] = cells.cellArea(i, j);
-                double down = j > 0 ? cells.horizontalFaceOpenLength(i, j) / centreDistance(ys, j)
-                        * medium.horizontalFaceInverse(i, j) : 0;
-                double left = i > 0 ? cells.verticalFaceOpenLength(i, j) / centreDistance(xs, i)
-                        * medium.verticalFaceInverse(i, j) : 0;
-                double right = i + 1 < nx ? cells.verticalFaceOpenLength(i + 1, j) / centreDistance(xs, i + 1)
-                        * medium.verticalFaceInverse(i + 1, j) : 0;
-                double up = j + 1 < ny ? cells.horizontalFaceOpenLength(i, j + 1) / centreDistance(ys, j + 1)
-                        * medium.horizontalFaceInverse(i, j + 1) : 0;
+                double down = j > 0 ? horizontal[j * nx + i] : 0;
+                double left = i > 0 ? vertical[j * (nx + 1) + i] : 0;
+                double right = i + 1 < nx ? vertical[j * (nx + 1) + i + 1] : 0;
+                double up = j + 1 < ny ? horizontal[(j + 1) * nx + i] : 0;
                 int kDown = j > 0 ? unknownOf[(j - 1) * nx + i] : -1;
                 int kLeft = i > 0 ? unknownOf[j * nx + i - 1] : -1;
                 int kRight = i + 1 < nx ? unknownOf[j * nx + i + 1] : -1;
                 int kUp = j + 1 < ny ? unknownOf[(j + 1) * nx + i] : -1;
+                // node (i', j') is the lower-left corner of cell (i', j'); c > 0 pairs SW–NE with +c
+                double cSw = cross == null ? 0 : cross[j * (nx + 1) + i];
+                double cSe = cross == null ? 0 : cross[j * (nx + 1) + i + 1];
+                double cNw = cross == null ? 0 : cross[(j + 1) * (nx + 1) + i];
+                double cNe = cross == null ? 0 : cross[(j + 1) * (nx + 1) + i + 1];
+                if (cSw != 0) {
+                    a.add(unknownOf[(j - 1) * nx + i - 1], -cSw);
+                }
                 double diagonal = 0;
                 if (kDown >= 0 && down > 0) {
                     a.add(kDown, -down);
                     diagonal += down;
+                }
+                if (cSe != 0) {
+                    a.add(unknownOf[(j - 1) * nx + i + 1], cSe);
                 }
                 if (kLeft >= 0 && left > 0) {
                     a.add(kLeft, -left);
@@ -90,12 +116,20 @@ public final class NeumannCellAssembler {
                 int self = k;
                 double rightWeight = kRight >= 0 ? right : 0;
                 double upWeight = kUp >= 0 ? up : 0;
-                a.add(self, diagonal + rightWeight + upWeight);
+                double crossDiagonal = cSw - cSe - cNw + cNe;
+                a.add(self, crossDiagonal == 0 ? diagonal + rightWeight + upWeight
+                        : diagonal + rightWeight + upWeight + crossDiagonal);
                 if (rightWeight > 0) {
                     a.add(kRight, -rightWeight);
                 }
+                if (cNw != 0) {
+                    a.add(unknownOf[(j + 1) * nx + i - 1], cNw);
+                }
                 if (upWeight > 0) {
                     a.add(kUp, -upWeight);
+                }
+                if (cNe != 0) {
+                    a.add(unknownOf[(j + 1) * nx + i + 1], -cNe);
                 }
                 a.endColumn();
             }

@@ -184,7 +184,7 @@ class MultifrontalCholeskyTest {
         a.set(1, 0, -1);
         a.set(1, 1, 4);
         assertThrows(IllegalArgumentException.class,
-                () -> MultifrontalCholesky.factor(a, new int[] {0, 1}, new int[] {0, 1}, 1));
+                () -> MultifrontalCholesky.factor(a, new int[] {0, 2}, new int[] {0, 1}, 1));
     }
 
     @Test
