@@ -2,7 +2,6 @@ package org.sectio.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.Locale;
@@ -10,12 +9,13 @@ import java.util.concurrent.Callable;
 import java.util.function.Supplier;
 import org.sectio.geometry.CrossSection;
 import org.sectio.geometry.Shapes;
-import org.sectio.geometry.file.SectionFileException;
-import org.sectio.geometry.file.SectionFiles;
 import org.sectio.io.FieldCsvWriter;
 import org.sectio.io.FieldImageLayout;
 import org.sectio.io.FieldImageWriter;
+import org.sectio.io.FrequencyReport;
+import org.sectio.io.FrequencyTableWriter;
 import org.sectio.io.ModeTableWriter;
+import org.sectio.io.SweepCharts;
 import org.sectio.io.TableFormat;
 import org.sectio.modes.Mode;
 import org.sectio.modes.ModeFamily;
@@ -24,9 +24,13 @@ import org.sectio.modes.ModeSolver;
 import org.sectio.modes.SolveException;
 import org.sectio.modes.SolveProgress;
 import org.sectio.modes.SolveSettings;
+import org.sectio.physics.AnalysisSettings;
+import org.sectio.physics.Caution;
+import org.sectio.physics.FrequencySpec;
 import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -35,14 +39,20 @@ import picocli.CommandLine.Spec;
 /**
  * {@code sectio solve [FILE]}: reads a geometry file (or takes the built-in WR-90 rectangle), solves
  * for its lowest modes and writes the mode table, optionally with per-mode field CSV and PNG files,
- * or exports the assembled matrices instead of solving. Everything about the request (options,
- * input, output places) is checked before the solve starts.
+ * or exports the assembled matrices instead of solving. With {@code --freq} or {@code --band} every
+ * mode is also analysed at those frequencies ({@link FrequencyAnalysis}) and the table carries the
+ * propagation, loss, power-handling and impedance figures, the guide summary and the caution;
+ * {@code --plots} adds the sweep charts. Everything about the request (options, input, output
+ * places) is checked before the solve starts.
  */
 @Command(name = "solve", mixinStandardHelpOptions = true, versionProvider = SectioMain.Version.class,
         sortOptions = false,
         description = {"Finds the lowest guided modes of a waveguide cross-section.",
             "FILE is a geometry file (JSON, see docs/geometry-files.md); without it the built-in WR-90 rectangle,"
-                + " 22.86 × 10.16 mm (EIA standard inner size), is solved."},
+                + " 22.86 × 10.16 mm (EIA standard inner size), is solved.",
+            "With --freq or --band each mode is also analysed at those frequencies: propagation, wall and"
+                + " filling loss, peak field, breakdown and rated power, characteristic impedance, and a guide"
+                + " summary. Power figures are engineering estimates and come with a caution."},
         footer = {"", "Exit codes: 0 done, 2 the request cannot be carried out as given, 1 the solve or an output failed."})
 final class SolveCommand implements Callable<Integer> {
 
@@ -50,7 +60,7 @@ final class SolveCommand implements Callable<Integer> {
     static final double WR90_WIDTH = 0.02286;
     /** Narrow side of the built-in WR-90 guide, m. */
     static final double WR90_HEIGHT = 0.01016;
-    private static final int DEFAULT_CELLS = 200;
+    private static final int DEFAULT_CELLS = SolveSettings.DEFAULT_CELLS;
 
     @Spec
     private CommandSpec spec;
@@ -93,8 +103,25 @@ final class SolveCommand implements Callable<Integer> {
 
     @Option(names = "--pencil", paramLabel = "DIR",
             description = "write the assembled matrices (Matrix Market) into DIR and stop without solving;"
-                    + " cannot be combined with --output or --fields")
+                    + " cannot be combined with --output, --fields, --freq or --band")
     private Path pencil;
+
+    @ArgGroup(exclusive = true, multiplicity = "0..1")
+    private FrequencyChoice frequencies;
+
+    @Mixin
+    private AnalysisOptions analysis;
+
+    @Option(names = "--voltage-path", paramLabel = "X1,Y1:X2,Y2",
+            description = "straight path (mm, in the section's coordinates) along which the voltage of the"
+                    + " impedances is taken (default: vertical, wall to wall at the centre line)")
+    private String voltagePath;
+
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "with --band: also write " + SweepCharts.DISPERSION_FILE + " (β against f, with the light"
+                    + " line) and " + SweepCharts.ATTENUATION_FILE + " (α_c + α_d against f) into DIR (created if"
+                    + " missing)")
+    private Path plots;
 
     /** --cells and --accuracy, which both pick the grid. */
     static final class GridChoice {
@@ -110,10 +137,15 @@ final class SolveCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         SolveSettings settings = settings();
+        FrequencySpec wanted = frequencySpec();
+        AnalysisSettings analysisSettings = wanted == null ? null : analysisSettings();
         CrossSection section = section();
         if (pencil != null) {
             if (output != null || fields != null) {
                 throw usage("--pencil exports the matrices without solving; it cannot be combined with --output or --fields");
+            }
+            if (wanted != null) {
+                throw usage("--pencil exports the matrices without solving; it cannot be combined with --freq or --band");
             }
             OutputPlaces.prepareFolder("--pencil", pencil, spec);
             for (Path written : ModeSolver.exportPencils(section, settings, pencil)) {
@@ -132,8 +164,13 @@ final class SolveCommand implements Callable<Integer> {
             }
             OutputPlaces.prepareFolder("--fields", fields, spec);
         }
+        if (plots != null) {
+            OutputPlaces.prepareFolder("--plots", plots, spec);
+        }
         ModeSet result = solve(section, settings);
-        if (output != null) {
+        if (wanted != null) {
+            writeAnalysis(section, result, wanted, analysisSettings);
+        } else if (output != null) {
             ModeTableWriter.write(result, format, output);
         } else {
             ModeTableWriter.write(result, format, out());
@@ -142,6 +179,59 @@ final class SolveCommand implements Callable<Integer> {
             writeFields(section, result);
         }
         return 0;
+    }
+
+    private void writeAnalysis(CrossSection section, ModeSet result, FrequencySpec wanted, AnalysisSettings how)
+            throws IOException {
+        FrequencyReport report = FrequencyAnalysis.analyse(section, result, wanted.values(), how);
+        if (output != null) {
+            FrequencyTableWriter.write(report, format, output);
+        } else {
+            FrequencyTableWriter.write(report, format, out());
+        }
+        if (format == TableFormat.CSV || output != null) {
+            spec.commandLine().getErr().println(Caution.TEXT);
+            spec.commandLine().getErr().flush();
+        }
+        if (plots != null && SweepCharts.write(FrequencyAnalysis.sweep(report), plots).size() < 2) {
+            spec.commandLine().getErr().println("sectio: no mode propagates in the band: "
+                    + SweepCharts.ATTENUATION_FILE + " not written");
+        }
+    }
+
+    /** The frequencies asked for, or null; refuses the options that need them when there are none. */
+    private FrequencySpec frequencySpec() {
+        if (frequencies == null) {
+            String orphan = AnalysisOptions.firstGiven(spec);
+            if (orphan == null && voltagePath != null) {
+                orphan = "--voltage-path";
+            }
+            if (orphan == null && plots != null) {
+                orphan = "--plots";
+            }
+            if (orphan != null) {
+                throw usage(orphan + " needs --freq F or --band START:STOP:POINTS: it sets how modes are analysed"
+                        + " at a frequency");
+            }
+            return null;
+        }
+        try {
+            FrequencySpec wanted = frequencies.spec();
+            if (plots != null && !wanted.isSweep()) {
+                throw usage("--plots draws curves over a band: use --band START:STOP:POINTS instead of --freq");
+            }
+            return wanted;
+        } catch (IllegalArgumentException e) {
+            throw usage(e.getMessage());
+        }
+    }
+
+    private AnalysisSettings analysisSettings() {
+        try {
+            return analysis.settings(voltagePath == null ? null : VoltagePathText.parse(voltagePath));
+        } catch (IllegalArgumentException e) {
+            throw usage(e.getMessage());
+        }
     }
 
     private ModeSet solve(CrossSection section, SolveSettings settings) {
@@ -195,15 +285,10 @@ final class SolveCommand implements Callable<Integer> {
         if (file == null) {
             return Shapes.rectangle(WR90_WIDTH, WR90_HEIGHT);
         }
-        if (Files.isDirectory(file)) {
-            throw usage("geometry file '" + file + "' is a folder, expected a JSON file");
-        }
         try {
-            return SectionFiles.read(file);
-        } catch (SectionFileException e) {
+            return SectionInput.read(file);
+        } catch (IllegalArgumentException e) {
             throw usage(e.getMessage());
-        } catch (IOException e) {
-            throw usage("cannot read geometry file: " + ErrorReporter.describe(e));
         }
     }
 

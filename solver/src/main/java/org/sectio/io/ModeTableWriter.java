@@ -91,12 +91,7 @@ public final class ModeTableWriter {
     }
 
     private static String readable(ModeSet modes) {
-        GridSummary grid = modes.grid();
-        StringBuilder text = new StringBuilder();
-        text.append("Modes of ").append(modes.sectionName()).append('\n');
-        text.append(String.format(Locale.ROOT, "grid %d × %d cells of %.5g × %.5g mm; unknowns TE %d, TM %d%n",
-                grid.cellsX(), grid.cellsY(), grid.cellWidth() * 1e3, grid.cellHeight() * 1e3,
-                grid.unknownsTE(), grid.unknownsTM()));
+        StringBuilder text = new StringBuilder(readableHeader(modes, ""));
         boolean anyTem = modes.modes().stream().anyMatch(m -> m.family() == ModeFamily.TEM);
         text.append(TABLE_HEADER).append(anyTem ? String.format(Locale.ROOT, "  %10s", "Z0 (ohm)") : "").append('\n');
         int number = 1;
@@ -115,11 +110,32 @@ public final class ModeTableWriter {
             }
             text.append('\n');
         }
-        SolveTiming time = modes.timing();
-        text.append(String.format(Locale.ROOT,
-                "time %.3f s: assembly %.3f s, factorization %.3f s, eigenvalues %.3f s%n",
-                time.totalSeconds(), time.assemblySeconds(), time.factorSeconds(), time.eigenSeconds()));
+        text.append(timingLine(modes));
         return text.toString().replace("\r\n", "\n");
+    }
+
+    /**
+     * @param modes a solve
+     * @param where text after the section name (e.g. " at 10 GHz"), or ""
+     * @return the two heading lines of the readable table: the section and the grid
+     */
+    static String readableHeader(ModeSet modes, String where) {
+        GridSummary grid = modes.grid();
+        return "Modes of " + modes.sectionName() + where + "\n"
+                + String.format(Locale.ROOT, "grid %d × %d cells of %.5g × %.5g mm; unknowns TE %d, TM %d%n",
+                grid.cellsX(), grid.cellsY(), grid.cellWidth() * 1e3, grid.cellHeight() * 1e3,
+                grid.unknownsTE(), grid.unknownsTM()).replace("\r\n", "\n");
+    }
+
+    /**
+     * @param modes a solve
+     * @return the timing line that ends the readable table
+     */
+    static String timingLine(ModeSet modes) {
+        SolveTiming time = modes.timing();
+        return String.format(Locale.ROOT, "time %.3f s: assembly %.3f s, factorization %.3f s, eigenvalues %.3f s%n",
+                time.totalSeconds(), time.assemblySeconds(), time.factorSeconds(), time.eigenSeconds())
+                .replace("\r\n", "\n");
     }
 
     private static String csv(ModeSet modes) {
@@ -138,6 +154,14 @@ public final class ModeTableWriter {
     }
 
     private static String json(ModeSet modes) {
+        return JsonNumbers.text(JSON, jsonTree(modes));
+    }
+
+    /**
+     * @param modes a solve
+     * @return the JSON object of {@link TableFormat#JSON} as a tree, for writers that add to it
+     */
+    static ObjectNode jsonTree(ModeSet modes) {
         ObjectNode root = JSON.createObjectNode();
         root.put("section", modes.sectionName());
         GridSummary grid = modes.grid();
@@ -168,19 +192,11 @@ public final class ModeTableWriter {
             putNumber(entry, "relative_error_estimate", mode.relativeErrorEstimate());
             putNumber(entry, "characteristic_impedance_ohm", mode.characteristicImpedanceOhms());
         }
-        try {
-            return JSON.writeValueAsString(root).replace("\r\n", "\n") + "\n";
-        } catch (IOException e) {
-            throw new IllegalStateException("a JSON tree of plain values could not be written", e);
-        }
+        return root;
     }
 
     /** JSON has no NaN or infinity: such values are written as null. */
     private static void putNumber(ObjectNode node, String key, double value) {
-        if (Double.isFinite(value)) {
-            node.put(key, value);
-        } else {
-            node.putNull(key);
-        }
+        JsonNumbers.put(node, key, value);
     }
 }
