@@ -1,8 +1,5 @@
 package org.sectio.benchmarks;
 
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.util.Random;
 import org.ejml.data.DMatrixSparseCSC;
 import org.sectio.eigen.MultifrontalAnalysis;
@@ -102,7 +99,8 @@ public final class FactorizationBenchmark {
                     row[11], row[11] / (8 * row[3]));
         }
         if (sizes.length > 1) {
-            System.out.printf("fitted exponent of 2-thread factor time vs unknowns: %.2f%n", slope(logN, logT));
+            System.out.printf("fitted exponent of 2-thread factor time vs unknowns: %.2f%n", Measures.slope(java.util.stream.IntStream.range(0, logN.length)
+                    .mapToObj(i -> new double[] {logN[i], logT[i]}).toList()));
         }
     }
 
@@ -111,7 +109,8 @@ public final class FactorizationBenchmark {
      *     factor times best of 2 (1 thread) and 3 (2 threads), solve times best of 5
      */
     private static double[] run(Disc disc, boolean oneThreadToo) {
-        resetPeaks();
+        System.gc();
+        Measures.resetPeaks();
         long t0 = System.nanoTime();
         NestedDissection.latticeOrdering(disc.column(), disc.row());
         long t1 = System.nanoTime();
@@ -157,7 +156,7 @@ public final class FactorizationBenchmark {
             block[i] = bestBlockSolve(factor, 2 << i);
         }
         return new double[] {factorOne, factorTwo, factor.factorNonZeros(), solveTwo, (t1 - t0) * 1e-9,
-            (t2 - t1) * 1e-9, peakHeapMegabytes(), solveOne, Math.sqrt(r2 / b2), block[0], block[1], block[2]};
+            (t2 - t1) * 1e-9, Measures.peakHeapBytes() / 1048576.0, solveOne, Math.sqrt(r2 / b2), block[0], block[1], block[2]};
     }
 
     private static double bestSolve(MultifrontalCholesky factor, double[] b, double[] x) {
@@ -186,36 +185,6 @@ public final class FactorizationBenchmark {
         return best;
     }
 
-    private static void resetPeaks() {
-        System.gc();
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                pool.resetPeakUsage();
-            }
-        }
-    }
 
-    private static double peakHeapMegabytes() {
-        long bytes = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                bytes += pool.getPeakUsage().getUsed();
-            }
-        }
-        return bytes / 1048576.0;
-    }
 
-    private static double slope(double[] x, double[] y) {
-        double mx = 0, my = 0;
-        for (int i = 0; i < x.length; i++) {
-            mx += x[i] / x.length;
-            my += y[i] / y.length;
-        }
-        double sxy = 0, sxx = 0;
-        for (int i = 0; i < x.length; i++) {
-            sxy += (x[i] - mx) * (y[i] - my);
-            sxx += (x[i] - mx) * (x[i] - mx);
-        }
-        return sxy / sxx;
-    }
 }

@@ -83,7 +83,7 @@ public final class GradingBenchmark {
                 double longer = Math.max(section.bounds().width(), section.bounds().height());
                 fit.add(new double[] {Math.log(longer / cells), Math.log(error)});
             }
-            System.out.printf(Locale.ROOT, "%s: fitted order %.2f%n", kind, slope(fit));
+            System.out.printf(Locale.ROOT, "%s: fitted order %.2f%n", kind, Measures.slope(fit));
         }
     }
 
@@ -120,22 +120,4 @@ public final class GradingBenchmark {
                 .lineTo(0, b));
     }
 
-    /** Least-squares slope of the (x, y) points. */
-    private static double slope(List<double[]> points) {
-        double mx = 0;
-        double my = 0;
-        for (double[] p : points) {
-            mx += p[0];
-            my += p[1];
-        }
-        mx /= points.size();
-        my /= points.size();
-        double sxy = 0;
-        double sxx = 0;
-        for (double[] p : points) {
-            sxy += (p[0] - mx) * (p[1] - my);
-            sxx += (p[0] - mx) * (p[0] - mx);
-        }
-        return sxy / sxx;
-    }
 }

@@ -1,8 +1,5 @@
 package org.sectio.benchmarks;
 
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
@@ -54,7 +51,7 @@ public final class SolveBenchmark {
             List<double[]> fit = new ArrayList<>();
             for (int cells : sizes) {
                 System.gc();
-                resetPeaks();
+                Measures.resetPeaks();
                 ModeSet set = ModeSolver.solve(circle,
                         new SolveSettings(10, EnumSet.of(family), cells, Double.NaN, false, threads), SolveProgress.SILENT);
                 double residual = set.modes().stream().mapToDouble(Mode::relativeResidual).max().orElse(Double.NaN);
@@ -62,45 +59,13 @@ public final class SolveBenchmark {
                 var t = set.timing();
                 System.out.printf(Locale.ROOT, "%-6s %6d %9d %11.2f %9.2f %10.2f %8.2f %13.2f %13.1e%n", family, cells,
                         unknowns, t.assemblySeconds(), t.factorSeconds(), t.eigenSeconds(), t.totalSeconds(),
-                        peakHeapBytes() / 1e9, residual);
+                        Measures.peakHeapBytes() / 1e9, residual);
                 fit.add(new double[] {Math.log(unknowns), Math.log(t.totalSeconds())});
             }
-            System.out.printf(Locale.ROOT, "%s: total time grows as N^%.2f over this range%n", family, slope(fit));
+            System.out.printf(Locale.ROOT, "%s: total time grows as N^%.2f over this range%n", family, Measures.slope(fit));
         }
     }
 
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            pool.resetPeakUsage();
-        }
-    }
 
-    private static long peakHeapBytes() {
-        long sum = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                sum += pool.getPeakUsage().getUsed();
-            }
-        }
-        return sum;
-    }
 
-    /** Least-squares slope of y on x. */
-    static double slope(List<double[]> points) {
-        double mx = 0;
-        double my = 0;
-        for (double[] p : points) {
-            mx += p[0];
-            my += p[1];
-        }
-        mx /= points.size();
-        my /= points.size();
-        double sxy = 0;
-        double sxx = 0;
-        for (double[] p : points) {
-            sxy += (p[0] - mx) * (p[1] - my);
-            sxx += (p[0] - mx) * (p[0] - mx);
-        }
-        return sxy / sxx;
-    }
 }

@@ -86,4 +86,42 @@ final class PencilResiduals {
         }
         return largest;
     }
+
+    /**
+     * Checks that A, M and the factorization have one order and that M is positive and finite.
+     *
+     * @return the order n
+     * @throws IllegalArgumentException naming the sizes or the first bad entry of M
+     */
+    static int checkedOrder(DMatrixSparseCSC a, double[] m, SymmetricFactorization shifted) {
+        int n = a.numRows;
+        if (a.numCols != n || m.length != n || shifted.size() != n) {
+            throw new IllegalArgumentException("pencil sizes disagree: A is " + a.numRows + " x " + a.numCols
+                    + ", M has " + m.length + " diagonal entries, the factorization has order " + shifted.size());
+        }
+        for (int i = 0; i < n; i++) {
+            if (!(m[i] > 0) || Double.isInfinite(m[i])) {
+                throw new IllegalArgumentException("M[" + i + "] = " + m[i] + ": the diagonal of M must be positive"
+                        + " and finite");
+            }
+        }
+        return n;
+    }
+
+    /**
+     * {@code {‖r‖₂ / (‖A x‖₂ + |λ| ‖M x‖₂), ‖r‖₂, ‖x‖₂}} with {@code r = A x − λ M x}, from one product:
+     * the relative residual, and the two norms the normwise backward error is made of.
+     */
+    static double[] residualParts(DMatrixSparseCSC a, double[] m, double lambda, double[] x) {
+        double[] ax = new double[x.length];
+        double relative = relativeResidual(a, m, lambda, x, ax);
+        double residualSquared = 0;
+        double vectorSquared = 0;
+        for (int i = 0; i < x.length; i++) {
+            double r = ax[i] - lambda * m[i] * x[i];
+            residualSquared += r * r;
+            vectorSquared += x[i] * x[i];
+        }
+        return new double[] {relative, Math.sqrt(residualSquared), Math.sqrt(vectorSquared)};
+    }
 }

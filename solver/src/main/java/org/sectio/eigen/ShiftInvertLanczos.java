@@ -89,7 +89,7 @@ public final class ShiftInvertLanczos {
      */
     public Eigenpairs solve(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
             IterationListener listener) {
-        int n = checkedOrder(a, m, shifted);
+        int n = PencilResiduals.checkedOrder(a, m, shifted);
         int count = settings.count();
         if (count >= n) {
             throw new IllegalArgumentException("count = " + count + " pairs asked of a pencil of order " + n
@@ -229,18 +229,4 @@ public final class ShiftInvertLanczos {
         return start;
     }
 
-    private static int checkedOrder(DMatrixSparseCSC a, double[] m, SymmetricFactorization shifted) {
-        int n = a.numRows;
-        if (a.numCols != n || m.length != n || shifted.size() != n) {
-            throw new IllegalArgumentException("pencil sizes disagree: A is " + a.numRows + " x " + a.numCols
-                    + ", M has " + m.length + " diagonal entries, the factorization has order " + shifted.size());
-        }
-        for (int i = 0; i < n; i++) {
-            if (!(m[i] > 0) || Double.isInfinite(m[i])) {
-                throw new IllegalArgumentException("M[" + i + "] = " + m[i] + ": the diagonal of M must be positive"
-                        + " and finite");
-            }
-        }
-        return n;
     }
-}

@@ -149,7 +149,7 @@ public final class ThickRestartLanczos {
     /** {@link #solve} with deflated vectors and the counts of the iteration. */
     Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
             IterationListener listener, double[][] deflated) {
-        int n = checkedOrder(a, m, shifted);
+        int n = PencilResiduals.checkedOrder(a, m, shifted);
         int d = deflated.length;
         int count = settings.count();
         if (count >= n - d) {
@@ -234,7 +234,7 @@ public final class ThickRestartLanczos {
                         + " for a pencil of order " + n);
             }
             double rho = rayleighQuotient(a, m, z);
-            double[] error = residuals(a, m, rho, z);
+            double[] error = PencilResiduals.residualParts(a, m, rho, z);
             double backward = error[1] / ((aNorm + Math.abs(rho) * mNorm) * error[2]);
             if (!(backward <= limit)) {
                 throw new IllegalArgumentException("deflated vector " + k + " is no finite eigenvector of the pencil:"
@@ -288,7 +288,7 @@ public final class ThickRestartLanczos {
         double mNorm = PencilResiduals.norm1(m);
         double limit = backwardErrorLimit(a, m, shift);
         double[][] errors = new double[count][];
-        IntStream.range(0, count).parallel().forEach(k -> errors[k] = residuals(a, m, values[k], vectors[k]));
+        IntStream.range(0, count).parallel().forEach(k -> errors[k] = PencilResiduals.residualParts(a, m, values[k], vectors[k]));
         double[] relative = new double[count];
         for (int k = 0; k < count; k++) {
             double backward = errors[k][1] / ((aNorm + Math.abs(values[k]) * mNorm) * errors[k][2]);
@@ -304,41 +304,5 @@ public final class ThickRestartLanczos {
         return new Eigenpairs(values, vectors, relative, applications);
     }
 
-    /**
-     * {@code {‖r‖₂ / (‖A x‖₂ + |λ| ‖M x‖₂), ‖r‖₂, ‖x‖₂}} with {@code r = A x − λ M x}, from one product.
-     */
-    private static double[] residuals(DMatrixSparseCSC a, double[] m, double lambda, double[] x) {
-        double[] ax = new double[x.length];
-        PencilResiduals.multiply(a, x, ax);
-        double residualSquared = 0;
-        double productSquared = 0;
-        double massSquared = 0;
-        double vectorSquared = 0;
-        for (int i = 0; i < x.length; i++) {
-            double mx = m[i] * x[i];
-            double r = ax[i] - lambda * mx;
-            residualSquared += r * r;
-            productSquared += ax[i] * ax[i];
-            massSquared += mx * mx;
-            vectorSquared += x[i] * x[i];
-        }
-        double residual = Math.sqrt(residualSquared);
-        double denominator = Math.sqrt(productSquared) + Math.abs(lambda) * Math.sqrt(massSquared);
-        return new double[] {denominator == 0 ? 0 : residual / denominator, residual, Math.sqrt(vectorSquared)};
-    }
 
-    private static int checkedOrder(DMatrixSparseCSC a, double[] m, SymmetricFactorization shifted) {
-        int n = a.numRows;
-        if (a.numCols != n || m.length != n || shifted.size() != n) {
-            throw new IllegalArgumentException("pencil sizes disagree: A is " + a.numRows + " x " + a.numCols
-                    + ", M has " + m.length + " diagonal entries, the factorization has order " + shifted.size());
-        }
-        for (int i = 0; i < n; i++) {
-            if (!(m[i] > 0) || Double.isInfinite(m[i])) {
-                throw new IllegalArgumentException("M[" + i + "] = " + m[i] + ": the diagonal of M must be positive"
-                        + " and finite");
-            }
-        }
-        return n;
     }
-}
