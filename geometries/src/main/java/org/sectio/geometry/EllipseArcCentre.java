@@ -8,7 +8,7 @@ package org.sectio.geometry;
  *
  * <p>Why a record of its own: the conversion has enough sign conventions (which of the four candidate
  * arcs, which of the two centres) to deserve one place and one test, and a later SVG importer calls it
- * through {@link Outline#ellipticalArcTo}. Angles are eccentric angles of the ellipse
+ * through {@link Outline#ellipticalArcTo} and reads the sweep of circular arcs from it. Angles are eccentric angles of the ellipse
  * (x, y) = c + R(φ)(a cos t, b sin t), in a y-up frame: positive sweep is counter-clockwise.
  *
  * @param centreX centre x, m
@@ -18,7 +18,7 @@ package org.sectio.geometry;
  * @param startParameter eccentric angle of the start point, radians
  * @param sweep signed change of the eccentric angle, radians, 0 &lt; |sweep| &lt; 2π
  */
-record EllipseArcCentre(double centreX, double centreY, double semiAxisA, double semiAxisB,
+public record EllipseArcCentre(double centreX, double centreY, double semiAxisA, double semiAxisB,
         double startParameter, double sweep) {
 
     /**
@@ -33,7 +33,7 @@ record EllipseArcCentre(double centreX, double centreY, double semiAxisA, double
      * @param counterClockwise take the arc along which the eccentric angle increases
      * @throws IllegalArgumentException if a semi-axis is not positive or the end equals the start
      */
-    static EllipseArcCentre fromEndpoints(double x1, double y1, double x2, double y2, double a, double b,
+    public static EllipseArcCentre fromEndpoints(double x1, double y1, double x2, double y2, double a, double b,
                                           double rotation, boolean largeArc, boolean counterClockwise) {
         if (!(a > 0) || !(b > 0) || !Double.isFinite(a + b) || !Double.isFinite(rotation)) {
             throw new IllegalArgumentException("elliptical arc to " + Millimetres.point(x2, y2)
@@ -81,5 +81,10 @@ record EllipseArcCentre(double centreX, double centreY, double semiAxisA, double
             sweep += 2 * Math.PI;
         }
         return new EllipseArcCentre(cx, cy, a, b, start, sweep);
+    }
+
+    /** @return whether the two semi-axes are equal to rounding, so that the arc is circular */
+    public boolean circular() {
+        return Math.abs(semiAxisA - semiAxisB) <= 1e-12 * Math.max(semiAxisA, semiAxisB);
     }
 }

@@ -2,6 +2,7 @@ package org.sectio.geometry.svg;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.sectio.geometry.EllipseArcCentre;
 import org.sectio.geometry.Loop;
 import org.sectio.geometry.Outline;
 
@@ -153,15 +154,18 @@ public final class SvgPaths {
                 lineTo(x, y, position);
                 return;
             }
-            CentreArc arc = CentreArc.fromEndpoints(ux, uy, x, y, rx, ry, rotationDegrees, largeArc, sweep);
+            double rotation = Math.toRadians(rotationDegrees % 360);
+            // F.6.6: the radii's signs are ignored
+            EllipseArcCentre arc = EllipseArcCentre.fromEndpoints(ux, uy, x, y, Math.abs(rx), Math.abs(ry), rotation,
+                    largeArc, sweep);
             boolean mirrored = (sx < 0) != (sy < 0);
             try {
                 if (arc.circular()) {
-                    outline.arcTo(sx * x, sy * y, mirrored ? -arc.sweepAngle() : arc.sweepAngle());
+                    outline.arcTo(sx * x, sy * y, mirrored ? -arc.sweep() : arc.sweep());
                 } else {
                     double s = Math.abs(sx);
-                    outline.ellipticalArcTo(sx * x, sy * y, s * arc.rx(), s * arc.ry(),
-                            mirrored ? -arc.rotation() : arc.rotation(), largeArc, mirrored != sweep);
+                    outline.ellipticalArcTo(sx * x, sy * y, s * arc.semiAxisA(), s * arc.semiAxisB(),
+                            mirrored ? -rotation : rotation, largeArc, mirrored != sweep);
                 }
             } catch (IllegalArgumentException e) {
                 throw new SvgPathException(position, "the arc cannot be built: " + e.getMessage());
