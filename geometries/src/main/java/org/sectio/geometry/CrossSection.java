@@ -2,6 +2,7 @@ package org.sectio.geometry;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A waveguide cross-section as the solver sees it: metal walls given as exact curves, and a filling.
@@ -48,6 +49,21 @@ public interface CrossSection {
      */
     default List<Loop> conductors() {
         return List.of(new Loop(wallPieces()));
+    }
+
+    /**
+     * The metal of one conductor's wall, when the cross-section says (a geometry file's
+     * {@code "conductor"} keys); the conductor loss is computed with it.
+     *
+     * @param conductorIndex the conductor's place in {@link #conductors()}: 0 the outer wall, ≥ 1 the inner ones
+     * @return the metal, or empty when not given (the caller's default applies)
+     * @throws IllegalArgumentException if the index is negative
+     */
+    default Optional<WallMetal> wallMetal(int conductorIndex) {
+        if (conductorIndex < 0) {
+            throw new IllegalArgumentException("conductor index must be ≥ 0, got " + conductorIndex);
+        }
+        return Optional.empty();
     }
 
     /** @return the regions filled with another material than {@link #filling()}, not overlapping */

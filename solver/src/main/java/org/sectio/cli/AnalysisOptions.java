@@ -19,9 +19,9 @@ final class AnalysisOptions {
     static final List<String> NAMES = List.of("--conductor", "--roughness", "--breakdown-field", "--derating",
             "--impedance");
 
-    @Option(names = "--conductor", paramLabel = "NAME|S_PER_M", defaultValue = "copper",
-            description = "wall metal: copper, silver, gold, aluminium or brass, or a conductivity in S/m such as"
-                    + " 3.5e7 (default: ${DEFAULT-VALUE})")
+    @Option(names = "--conductor", paramLabel = "NAME|S_PER_M",
+            description = "wall metal of every wall: copper, silver, gold, aluminium or brass, or a conductivity in"
+                    + " S/m such as 3.5e7 (default: the metal the geometry file gives the walls, else copper)")
     private String conductor;
 
     @Option(names = "--roughness", paramLabel = "LENGTH", defaultValue = "0",
@@ -80,7 +80,15 @@ final class AnalysisOptions {
                 ? AnalysisSettings.defaults().definition() : impedance.definition(), path);
     }
 
+    /** @return whether {@code --conductor} was given (it then overrides the geometry file's metal) */
+    boolean conductorGiven() {
+        return conductor != null;
+    }
+
     private Conductor conductor() {
+        if (conductor == null) {
+            return Conductor.COPPER;
+        }
         String text = conductor.strip();
         if (!text.isEmpty() && (Character.isDigit(text.charAt(0)) || text.charAt(0) == '.' || text.charAt(0) == '-'
                 || text.charAt(0) == '+')) {

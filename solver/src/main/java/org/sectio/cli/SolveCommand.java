@@ -140,6 +140,9 @@ final class SolveCommand implements Callable<Integer> {
         FrequencySpec wanted = frequencySpec();
         AnalysisSettings analysisSettings = wanted == null ? null : analysisSettings();
         CrossSection section = section();
+        if (analysisSettings != null && !analysis.conductorGiven()) {
+            analysisSettings = SectionMetals.applied(analysisSettings, section, spec.commandLine().getErr());
+        }
         if (pencil != null) {
             if (output != null || fields != null) {
                 throw usage("--pencil exports the matrices without solving; it cannot be combined with --output or --fields");

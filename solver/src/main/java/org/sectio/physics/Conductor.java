@@ -1,8 +1,7 @@
 package org.sectio.physics;
 
 import java.util.List;
-import java.util.Locale;
-import java.util.stream.Collectors;
+import org.sectio.geometry.WallMetal;
 
 /**
  * A wall metal: its DC conductivity and relative permeability, and the skin-effect relations.
@@ -10,10 +9,9 @@ import java.util.stream.Collectors;
  * <p>Skin depth δs = √(2 / (ω μ0 μr σ)) and surface resistance Rs = 1/(σ δs) = √(ω μ0 μr / (2σ))
  * (Pozar, Microwave Engineering, 4th ed., §1.4 for δs in a good conductor and §1.7 for Rs, section
  * numbers from memory; valid for a good conductor, σ ≫ ωε, and walls much
- * thicker than δs). The built-in conductivities are those of Pozar, Appendix F, "Conductivity of
- * some materials" (values quoted from memory): copper 5.813e7, silver 6.173e7, gold 4.098e7,
- * aluminium 3.816e7, brass 2.564e7 S/m. Real walls (plating, alloy, temperature, roughness) are
- * usually worse; see {@link RoughnessFactor}.
+ * thicker than δs). The built-in metals and their conductivities (Pozar, Appendix F, from memory) are
+ * kept in one place, {@link WallMetal}, and taken from there. Real walls (plating, alloy,
+ * temperature, roughness) are usually worse; see {@link RoughnessFactor}.
  *
  * @param name a label, not blank
  * @param conductivity σ, finite and &gt; 0, S/m
@@ -21,16 +19,16 @@ import java.util.stream.Collectors;
  */
 public record Conductor(String name, double conductivity, double relativePermeability) {
 
-    /** Copper, 5.813e7 S/m (Pozar Appendix F, from memory). */
-    public static final Conductor COPPER = new Conductor("copper", 5.813e7, 1.0);
-    /** Silver, 6.173e7 S/m (Pozar Appendix F, from memory). */
-    public static final Conductor SILVER = new Conductor("silver", 6.173e7, 1.0);
-    /** Gold, 4.098e7 S/m (Pozar Appendix F, from memory). */
-    public static final Conductor GOLD = new Conductor("gold", 4.098e7, 1.0);
-    /** Aluminium, 3.816e7 S/m (Pozar Appendix F, from memory). */
-    public static final Conductor ALUMINIUM = new Conductor("aluminium", 3.816e7, 1.0);
-    /** Brass, 2.564e7 S/m (Pozar Appendix F, from memory). */
-    public static final Conductor BRASS = new Conductor("brass", 2.564e7, 1.0);
+    /** Copper: {@link WallMetal#COPPER}. */
+    public static final Conductor COPPER = of(WallMetal.COPPER);
+    /** Silver: {@link WallMetal#SILVER}. */
+    public static final Conductor SILVER = of(WallMetal.SILVER);
+    /** Gold: {@link WallMetal#GOLD}. */
+    public static final Conductor GOLD = of(WallMetal.GOLD);
+    /** Aluminium: {@link WallMetal#ALUMINIUM}. */
+    public static final Conductor ALUMINIUM = of(WallMetal.ALUMINIUM);
+    /** Brass: {@link WallMetal#BRASS}. */
+    public static final Conductor BRASS = of(WallMetal.BRASS);
 
     private static final List<Conductor> BUILT_IN = List.of(COPPER, SILVER, GOLD, ALUMINIUM, BRASS);
 
@@ -57,41 +55,53 @@ public record Conductor(String name, double conductivity, double relativePermeab
     }
 
     /**
-     * A non-magnetic conductor of the user's own conductivity.
+     * The conductor of a wall metal given by the geometry (same name, σ and μr).
+     *
+     * @param metal the metal, not null
+     * @return its conductor; one of the constants when the metal is a built-in one
+     * @throws IllegalArgumentException if the metal is null
+     */
+    public static Conductor of(WallMetal metal) {
+        if (metal == null) {
+            throw new IllegalArgumentException("a conductor needs a wall metal, got null");
+        }
+        Conductor c = new Conductor(metal.name(), metal.conductivity(), metal.relativePermeability());
+        if (BUILT_IN != null) {
+            for (Conductor known : BUILT_IN) {
+                if (known.equals(c)) {
+                    return known;
+                }
+            }
+        }
+        return c;
+    }
+
+    /**
+     * A non-magnetic conductor of the user's own conductivity ({@link WallMetal#user}).
      *
      * @param conductivity σ &gt; 0, S/m
      * @return a conductor named "user (σ S/m)"
      * @throws IllegalArgumentException if σ is out of range
      */
     public static Conductor user(double conductivity) {
-        return new Conductor("user (" + conductivity + " S/m)", conductivity, 1.0);
+        return of(WallMetal.user(conductivity));
     }
 
-    /** @return the built-in conductors, in a fixed order */
+    /** @return the built-in conductors, in a fixed order (those of {@link WallMetal#builtIn()}) */
     public static List<Conductor> builtIn() {
         return BUILT_IN;
     }
 
     /**
-     * A built-in conductor by name, ignoring case and surrounding blanks ("aluminum" is accepted for
-     * aluminium).
+     * A built-in conductor by name ({@link WallMetal#named}), ignoring case and surrounding blanks
+     * ("aluminum" is accepted for aluminium).
      *
      * @param name e.g. "Copper"
-     * @return the conductor
+     * @return the conductor (one of the constants)
      * @throws IllegalArgumentException if the name is unknown; the one-line message lists the known names
      */
     public static Conductor named(String name) {
-        String key = name == null ? "" : name.strip().toLowerCase(Locale.ROOT);
-        if (key.equals("aluminum")) {
-            key = "aluminium";
-        }
-        for (Conductor c : BUILT_IN) {
-            if (c.name.equals(key)) {
-                return c;
-            }
-        }
-        throw new IllegalArgumentException("unknown conductor \"" + name + "\"; known: "
-                + BUILT_IN.stream().map(Conductor::name).collect(Collectors.joining(", ")));
+        return of(WallMetal.named(name));
     }
 
     /**

@@ -1,6 +1,7 @@
 package org.sectio.geometry.file;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.sectio.geometry.Dielectric;
@@ -8,16 +9,19 @@ import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Loop;
 import org.sectio.geometry.Material;
 import org.sectio.geometry.Region;
+import org.sectio.geometry.WallMetal;
 
 /**
  * Reads the top level of a geometry file into a guide: the unit and parameters first (every later
  * value is read against them), then exactly one of {@code "wall"}, {@code "family"} or
- * {@code "standard"}, then the optional inner conductors, dielectric regions and filling.
+ * {@code "standard"}, then the optional inner conductors, dielectric regions and filling, and last the
+ * wall metals: {@code "conductor"} for every wall, {@code "inner_conductor_metal"} for every inner
+ * conductor, and an inner-conductor entry's own {@code "conductor"}, each overriding the one before.
  */
 final class GuideReader {
 
     static final String[] TOP_LEVEL = {"name", "units", "parameters", "wall", "family", "standard",
-        "rounded_corners", "inner_conductors", "dielectrics", "filling"};
+        "rounded_corners", "inner_conductors", "dielectrics", "filling", "conductor", "inner_conductor_metal"};
 
     private final ShapeKinds shapes = new ShapeKinds();
 
@@ -65,8 +69,9 @@ final class GuideReader {
             default -> StandardGuide.read(root.get("standard"),
                     root.has("rounded_corners") ? root.get("rounded_corners") : null);
         };
+        Map<Integer, WallMetal> ownMetals = new HashMap<>();
         if (root.has("inner_conductors")) {
-            guide = withConductors(guide, root.get("inner_conductors"));
+            guide = withConductors(guide, root.get("inner_conductors"), ownMetals);
         }
         if (root.has("dielectrics")) {
             guide = withDielectrics(guide, root.get("dielectrics"));
@@ -78,7 +83,33 @@ final class GuideReader {
             f.allowOnly("permittivity", "loss_tangent", "permeability");
             filling = MaterialReader.read(f, false);
         }
-        return new GuideSection(name != null ? name : guide.name(), guide.interior(), guide.dielectrics(), filling);
+        return new GuideSection(name != null ? name : guide.name(), guide.interior(), guide.dielectrics(), filling,
+                wallMetals(root, guide.conductors().size(), ownMetals));
+    }
+
+    /** @return the metal of each conductor given: every wall, then every inner one, then each entry's own */
+    private static Map<Integer, WallMetal> wallMetals(SectionNode root, int conductors, Map<Integer, WallMetal> own)
+            throws SectionFileException {
+        Map<Integer, WallMetal> metals = new HashMap<>();
+        if (root.has("conductor")) {
+            WallMetal all = WallMetalReader.read(root.get("conductor"));
+            for (int c = 0; c < conductors; c++) {
+                metals.put(c, all);
+            }
+        }
+        if (root.has("inner_conductor_metal")) {
+            SectionNode inner = root.get("inner_conductor_metal");
+            WallMetal metal = WallMetalReader.read(inner);
+            if (conductors < 2) {
+                throw inner.problem("the guide has no inner conductor, expected \"inner_conductor_metal\" only with"
+                        + " \"inner_conductors\" or a family that has one (coaxial)");
+            }
+            for (int c = 1; c < conductors; c++) {
+                metals.put(c, metal);
+            }
+        }
+        metals.putAll(own);
+        return metals;
     }
 
     private GuideSection wall(SectionNode wall) throws SectionFileException {
@@ -93,9 +124,18 @@ final class GuideReader {
         return new Region(loops);
     }
 
-    private GuideSection withConductors(GuideSection guide, SectionNode list) throws SectionFileException {
+    private GuideSection withConductors(GuideSection guide, SectionNode list, Map<Integer, WallMetal> ownMetals)
+            throws SectionFileException {
         Region interior = guide.interior();
-        for (SectionNode item : list.elements("an array of shapes")) {
+        for (SectionNode entry : list.elements("an array of shapes")) {
+            SectionNode item = entry;
+            if (entry.has("shape") || entry.has("conductor")) {
+                entry.allowOnly("shape", "conductor");
+                item = entry.get("shape");
+                if (entry.has("conductor")) {
+                    ownMetals.put(interior.loops().size(), WallMetalReader.read(entry.get("conductor")));
+                }
+            }
             Region conductor = shapes.read(item).region();
             if (conductor.loops().size() != 1) {
                 throw item.problem("an inner conductor must be bounded by one loop, got "

@@ -22,7 +22,8 @@ import org.sectio.geometry.CrossSection;
  * or expressions), exactly one of {@code "wall"} (a shape: rectangle, circle, ellipse, outline, svg_path,
  * union, difference, intersection), {@code "family"} (a built-in family and its values) or
  * {@code "standard"} (a WR designation, with optional {@code "rounded_corners"}), and the optional
- * {@code "inner_conductors"}, {@code "dielectrics"} and {@code "filling"}. Every number may be an
+ * {@code "inner_conductors"}, {@code "dielectrics"}, {@code "filling"} and the wall metals {@code "conductor"}
+ * and {@code "inner_conductor_metal"}. Every number may be an
  * expression string over the parameters. Faults are reported with a {@link SectionFileException} naming
  * the file, line, column and JSON path. All lengths are converted to metres. The full description is in
  * {@code docs/geometry-files.md}.
