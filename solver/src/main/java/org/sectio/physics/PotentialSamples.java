@@ -13,9 +13,14 @@ import org.sectio.modes.ModeFamily;
  *
  * <p>At a point p with a frame (t, n) — the wall tangent and the inward normal at a wall point, the axes
  * elsewhere — ψ is fitted as c0 + c1 s + c2 r + c3 s² + c4 s r + c5 r² in the local coordinates
- * s = (x − p)·t / h, r = (x − p)·n / h (h the local grid step) to the usable samples within a radius R
- * (3 h, widened to 4.5 h and 6 h when fewer than 10 samples lie there), each weighted by
- * (1 − d²/R²)². At a wall the boundary condition is built in: at p itself through the basis (TE,
+ * s = (x − p)·t / h, r = (x − p)·n / h (h the local grid step) to the usable samples within a radius R,
+ * each weighted by (1 − d²/R²)². R is 3 h, widened to 4.5 h, 6 h, 9 h and 12 h until at least 10 samples
+ * of positive weight lie there and the normal equations are well conditioned ({@link NormalEquations}:
+ * the equilibrated condition number at most 2e4): a sample count alone is not enough, since beside a
+ * Dirichlet wall on a grid line (TM, whose wall nodes carry no sample) a 3 h half-disc can hold only two
+ * usable grid columns, on which s² is not determined. If no radius gives a well-conditioned quadratic, a
+ * linear fit (1, s, r) over 3 h, 6 h or 12 h is used, with ∇ψ then only first order there.
+ * At a wall the boundary condition is built in: at p itself through the basis (TE,
  * ∂Hz/∂n = 0: c2 dropped; TM, Ez = 0: c0 dropped; TEM: φ free), and at the neighbouring wall
  * quadrature points of the same conductor within R as exact rows of the least-squares system
  * (TE: ∂ψ/∂n_q = 0; TM and TEM: ψ(q) = ψ(p)), so the fit follows a curved wall; only samples on the
@@ -38,7 +43,12 @@ final class PotentialSamples {
     /** Basis index of the constant term (dropped for a Dirichlet wall). */
     private static final int CONSTANT_TERM = 0;
     private static final int MIN_SAMPLES = 10;
-    private static final double[] RADII = {3.0, 4.5, 6.0};
+    /** Fit radii of the quadratic, in local grid steps, tried in turn until the fit is well conditioned. */
+    private static final double[] RADII = {3.0, 4.5, 6.0, 9.0, 12.0};
+    /** Fit radii of the linear fallback. */
+    private static final double[] LINEAR_RADII = {3.0, 6.0, 12.0};
+    /** Basis terms of the linear fallback: 1, s, r. */
+    private static final int LINEAR_TERMS = 3;
 
     /** How the fit treats the point. */
     enum Constraint {
@@ -60,9 +70,9 @@ final class PotentialSamples {
     private final ModeFamily family;
 
     private WallPoints walls;
-    private final double[] gram = new double[36];
-    private final double[] rhs = new double[6];
+    private final NormalEquations system = new NormalEquations();
     private final double[] basis = new double[6];
+    private final double[] row = new double[6];
     private final int[] active = new int[6];
 
     /** ψ at the last fitted point. */
@@ -163,7 +173,8 @@ final class PotentialSamples {
      * @param tx unit tangent x (1 away from walls)
      * @param ty unit tangent y (0 away from walls)
      * @param constraint the boundary condition at the point
-     * @throws IllegalStateException if fewer than 10 usable samples lie within 6 h of the point
+     * @throws IllegalStateException if even the linear fit over 12 h is singular or ill conditioned (fewer
+     *     than 4 usable samples, or all on one line, near the point)
      */
     void fit(double x, double y, double tx, double ty, Constraint constraint) {
         fit(x, y, tx, ty, constraint, -1);
@@ -175,45 +186,64 @@ final class PotentialSamples {
      * the fit as exact data (∂ψ/∂n = 0 for TE, ψ = ψ(p) for TM and TEM).
      */
     void fit(double x, double y, double tx, double ty, Constraint constraint, int conductor) {
+        double h = localStep(x, y);
+        for (double radiusInSteps : RADII) {
+            if (tryFit(x, y, tx, ty, constraint, conductor, h, radiusInSteps * h, basis.length, MIN_SAMPLES)) {
+                return;
+            }
+        }
+        for (double radiusInSteps : LINEAR_RADII) {
+            if (tryFit(x, y, tx, ty, constraint, conductor, h, radiusInSteps * h, LINEAR_TERMS, LINEAR_TERMS + 1)) {
+                return;
+            }
+        }
+        throw new IllegalStateException(String.format(java.util.Locale.ROOT,
+                "the field samples near (%.6g, %.6g) m are too few or aligned to rebuild the %s field there even"
+                        + " with a linear fit over %.3g grid steps; use a finer grid", x, y, family,
+                LINEAR_RADII[LINEAR_RADII.length - 1]));
+    }
+
+    /**
+     * One fit with the basis terms below {@code terms} over the samples within {@code radius}; sets the
+     * results and returns true if at least {@code minSamples} samples lie there and the normal equations
+     * are well conditioned.
+     */
+    private boolean tryFit(double x, double y, double tx, double ty, Constraint constraint, int conductor, double h,
+                           double radius, int terms, int minSamples) {
         double nx = -ty;
         double ny = tx;
         int count = 0;
-        for (int b = 0; b < 6; b++) {
+        for (int b = 0; b < terms; b++) {
             boolean dropped = (constraint == Constraint.ZERO_NORMAL_DERIVATIVE && b == NORMAL_TERM)
                     || (constraint == Constraint.ZERO_VALUE && b == CONSTANT_TERM);
             if (!dropped) {
                 active[count++] = b;
             }
         }
-        double h = localStep(x, y);
+        system.clear(count);
         boolean wall = constraint != Constraint.NONE;
-        for (double radiusInSteps : RADII) {
-            double radius = radiusInSteps * h;
-            if (accumulate(x, y, tx, ty, nx, ny, h, radius, wall, count) >= MIN_SAMPLES) {
-                if (conductor >= 0 && walls != null) {
-                    accumulateWall(x, y, tx, ty, nx, ny, h, radius, constraint, count, conductor);
-                }
-                double[] c = solve(count);
-                double c0 = constraint == Constraint.ZERO_VALUE ? 0 : c[0];
-                double cs = c[constraint == Constraint.ZERO_VALUE ? 0 : 1] / h;
-                double cr = constraint == Constraint.ZERO_NORMAL_DERIVATIVE ? 0
-                        : c[constraint == Constraint.ZERO_VALUE ? 1 : 2] / h;
-                value = c0;
-                gradientX = cs * tx + cr * nx;
-                gradientY = cs * ty + cr * ny;
-                return;
-            }
+        if (accumulate(x, y, tx, ty, nx, ny, h, radius, wall, count) < minSamples) {
+            return false;
         }
-        throw new IllegalStateException(String.format(java.util.Locale.ROOT,
-                "too few field samples near (%.6g, %.6g) m to rebuild the %s field there; use a finer grid",
-                x, y, family));
+        if (conductor >= 0 && walls != null) {
+            accumulateWall(x, y, tx, ty, nx, ny, h, radius, constraint, count, conductor);
+        }
+        if (!system.solve()) {
+            return false;
+        }
+        int first = constraint == Constraint.ZERO_VALUE ? 0 : 1;
+        double c0 = constraint == Constraint.ZERO_VALUE ? 0 : system.coefficient(0);
+        double cs = system.coefficient(first) / h;
+        double cr = constraint == Constraint.ZERO_NORMAL_DERIVATIVE ? 0 : system.coefficient(first + 1) / h;
+        value = c0;
+        gradientX = cs * tx + cr * nx;
+        gradientY = cs * ty + cr * ny;
+        return true;
     }
 
     /** Builds the normal equations over the samples within {@code radius}; returns how many were used. */
     private int accumulate(double x, double y, double tx, double ty, double nx, double ny, double h, double radius,
                            boolean wall, int count) {
-        Arrays.fill(gram, 0, count * count, 0.0);
-        Arrays.fill(rhs, 0, count, 0.0);
         int i0 = Math.max(0, lowerIndex(xs, x - radius));
         int i1 = Math.min(xs.length - 1, upperIndex(xs, x + radius));
         int j0 = Math.max(0, lowerIndex(ys, y - radius));
@@ -243,13 +273,12 @@ final class PotentialSamples {
                 basis[4] = s * r;
                 basis[5] = r * r;
                 for (int a = 0; a < count; a++) {
-                    double wa = w * basis[active[a]];
-                    rhs[a] += wa * values[k];
-                    for (int b = 0; b <= a; b++) {
-                        gram[a * count + b] += wa * basis[active[b]];
-                    }
+                    row[a] = basis[active[a]];
                 }
-                used++;
+                system.addRow(row, w, values[k]);
+                if (w > 0) {
+                    used++;
+                }
             }
         }
         return used;
@@ -296,48 +325,10 @@ final class PotentialSamples {
             double qw = 1 - d2 / r2max;
             double w = qw * qw;
             for (int a = 0; a < count; a++) {
-                double wa = w * basis[active[a]];
-                for (int b = 0; b <= a; b++) {
-                    gram[a * count + b] += wa * basis[active[b]];
-                }
+                row[a] = basis[active[a]];
             }
+            system.addRow(row, w, 0);
         }
-    }
-
-    /** Solves the normal equations (lower triangle stored) by Cholesky, in place; returns the coefficients. */
-    private double[] solve(int count) {
-        for (int a = 0; a < count; a++) {
-            for (int b = 0; b <= a; b++) {
-                double sum = gram[a * count + b];
-                for (int c = 0; c < b; c++) {
-                    sum -= gram[a * count + c] * gram[b * count + c];
-                }
-                if (a == b) {
-                    if (!(sum > 1e-12 * Math.abs(gram[a * count + a]) + 1e-300)) {
-                        throw new IllegalStateException("the field samples near a point are too few or aligned to"
-                                + " fit the " + family + " field; use a finer grid");
-                    }
-                    gram[a * count + a] = Math.sqrt(sum);
-                } else {
-                    gram[a * count + b] = sum / gram[b * count + b];
-                }
-            }
-        }
-        for (int a = 0; a < count; a++) {
-            double sum = rhs[a];
-            for (int c = 0; c < a; c++) {
-                sum -= gram[a * count + c] * rhs[c];
-            }
-            rhs[a] = sum / gram[a * count + a];
-        }
-        for (int a = count - 1; a >= 0; a--) {
-            double sum = rhs[a];
-            for (int c = a + 1; c < count; c++) {
-                sum -= gram[c * count + a] * rhs[c];
-            }
-            rhs[a] = sum / gram[a * count + a];
-        }
-        return rhs;
     }
 
     private static int lowerIndex(double[] lines, double v) {
