@@ -104,6 +104,7 @@ public final class FrequencyTableWriter {
         text.append(settingsLines(report.settings(), f));
         text.append(rows(report).render());
         text.append(notes(report));
+        text.append(peaks(report));
         text.append(summary(report));
         text.append(Caution.TEXT).append('\n');
         text.append(ModeTableWriter.timingLine(report.modes()));
@@ -173,6 +174,27 @@ public final class FrequencyTableWriter {
             }
         }
         return table;
+    }
+
+    /**
+     * Where each propagating mode's transverse electric field peaks (from the first frequency at which it
+     * propagates; the pattern, and so the place, does not change with frequency in a homogeneous guide).
+     */
+    private static String peaks(FrequencyReport report) {
+        StringBuilder text = new StringBuilder();
+        int modes = report.identities().size();
+        for (int k = 0; k < modes; k++) {
+            for (List<ModeAtFrequency> row : report.figures()) {
+                ModeAtFrequency at = row.get(k);
+                if (Double.isFinite(at.peakX()) && Double.isFinite(at.peakFieldPerRootWatt())) {
+                    text.append(String.format(Locale.ROOT, "field peak: %s, %.4g kV/m at 1 W, at (%.3f, %.3f) mm%n",
+                            report.identities().get(k).label(), at.peakFieldPerRootWatt() * 1e-3, at.peakX() * 1e3,
+                            at.peakY() * 1e3));
+                    break;
+                }
+            }
+        }
+        return text.toString();
     }
 
     /** The distinct reasons for missing figures, each with the modes it applies to. */

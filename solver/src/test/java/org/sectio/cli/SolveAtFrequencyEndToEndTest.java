@@ -61,6 +61,20 @@ class SolveAtFrequencyEndToEndTest {
     }
 
     @Test
+    void theTableSaysWhereTheTe10FieldPeaks() {
+        // TE10: |E| ∝ sin(πx/a), largest on the centre line x = a/2 = 11.43 mm at every height (Pozar §3.3)
+        CapturedRun run = CapturedRun.of(args("--freq", "10GHz"));
+        assertEquals(0, run.exitCode(), run.err());
+        String line = run.out().lines().filter(l -> l.startsWith("field peak: TE10,")).findFirst().orElse("");
+        java.util.regex.Matcher at = java.util.regex.Pattern.compile("at \\(([-0-9.]+), ([-0-9.]+)\\) mm").matcher(line);
+        assertTrue(at.find(), run.out());
+        double x = Double.parseDouble(at.group(1));
+        double y = Double.parseDouble(at.group(2));
+        assertEquals(A / 2 * 1e3, x, 0.5 * A / 60 * 1e3, line); // within half a cell of the 60-cell grid
+        assertTrue(y >= 0 && y <= B * 1e3, line);
+    }
+
+    @Test
     void theTableCarriesTheSkinDepthOnceTheSummaryAndTheCaution() {
         CapturedRun run = CapturedRun.of(args("--freq", "10GHz"));
         assertEquals(0, run.exitCode(), run.err());
