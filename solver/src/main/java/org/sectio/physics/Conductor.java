@@ -41,17 +41,7 @@ public record Conductor(String name, double conductivity, double relativePermeab
      * @throws IllegalArgumentException if a value is out of range; the message names it
      */
     public Conductor {
-        if (name == null || name.isBlank()) {
-            throw new IllegalArgumentException("a conductor needs a name, got \"" + name + "\"");
-        }
-        if (!(conductivity > 0) || Double.isInfinite(conductivity)) {
-            throw new IllegalArgumentException("conductivity of " + name + " must be finite and > 0 S/m, got "
-                    + conductivity);
-        }
-        if (!(relativePermeability > 0) || Double.isInfinite(relativePermeability)) {
-            throw new IllegalArgumentException("relative permeability of " + name + " must be finite and > 0, got "
-                    + relativePermeability);
-        }
+        new WallMetal(name, conductivity, relativePermeability); // the one place the values are checked
     }
 
     /**
