@@ -7,6 +7,8 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.security.SecureRandom;
 
 /**
  * Writes a file so that it appears complete or not at all: the content goes to a temporary file in
@@ -25,6 +27,8 @@ public final class AtomicFile {
         void writeTo(OutputStream out) throws IOException;
     }
 
+    private static final SecureRandom RANDOM = new SecureRandom();
+
     private AtomicFile() {
     }
 
@@ -36,9 +40,12 @@ public final class AtomicFile {
     public static void write(Path target, Content content) throws IOException {
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
-        Path temporary = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        // not Files.createTempFile: that makes the file owner-only (0600), and the user's result would keep it
+        Path temporary = folder.resolve("." + absolute.getFileName() + "." + Long.toUnsignedString(RANDOM.nextLong(), 36)
+                + ".part");
         try {
-            try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(temporary))) {
+            try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(temporary,
+                    StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE))) {
                 content.writeTo(out);
             }
             try {

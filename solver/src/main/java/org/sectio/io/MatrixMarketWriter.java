@@ -2,12 +2,10 @@ package org.sectio.io;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import org.ejml.data.DMatrixSparseCSC;
 
 /**
@@ -138,29 +136,15 @@ public final class MatrixMarketWriter {
 
     private static void writeAtomically(Path file, Body body) {
         Path target = file.toAbsolutePath();
-        Path temporary = null;
         try {
-            temporary = Files.createTempFile(target.getParent(), target.getFileName().toString() + ".", ".part");
-            try (BufferedWriter out = Files.newBufferedWriter(temporary, StandardCharsets.US_ASCII)) {
+            AtomicFile.write(target, stream -> {
+                BufferedWriter out = new BufferedWriter(new OutputStreamWriter(stream, StandardCharsets.US_ASCII));
                 body.write(out);
-            }
-            try {
-                Files.move(temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException notAtomic) {
-                Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-            temporary = null;
+                out.flush();
+            });
         } catch (IOException failure) {
             throw new UncheckedIOException("could not write Matrix Market file " + target + ": " + failure.getMessage()
                     + "; check that the directory exists and is writable", failure);
-        } finally {
-            if (temporary != null) {
-                try {
-                    Files.deleteIfExists(temporary);
-                } catch (IOException ignored) {
-                    // the original failure is already being reported
-                }
-            }
         }
     }
 }
