@@ -88,7 +88,12 @@ class CoaxialGuideTest {
     }
 
     static double te11() {
-        return lowestRoot(k -> j1Prime(k * A) * BesselY.y1Prime(k * B) - j1Prime(k * B) * BesselY.y1Prime(k * A),
+        return te11(A, B);
+    }
+
+    /** kc of TE11 for inner radius a and outer radius b, m: the lowest root of the cross product above. */
+    static double te11(double a, double b) {
+        return lowestRoot(k -> j1Prime(k * a) * BesselY.y1Prime(k * b) - j1Prime(k * b) * BesselY.y1Prime(k * a),
                 10, 1.0);
     }
 
