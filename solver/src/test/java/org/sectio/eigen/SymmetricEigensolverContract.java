@@ -1,6 +1,7 @@
 package org.sectio.eigen;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
@@ -37,7 +38,16 @@ abstract class SymmetricEigensolverContract {
      * @param count how many of the lowest pairs are wanted
      * @return the pairs found by the solver under test
      */
-    protected abstract Eigenpairs lowestPairs(DMatrixSparseCSC a, double[] m, double shift, int count);
+    protected Eigenpairs lowestPairs(DMatrixSparseCSC a, double[] m, double shift, int count) {
+        return solve(a, m, shift, new EjmlCholesky(TestPencils.shifted(a, m, shift), null), count);
+    }
+
+    /**
+     * @param factor a factorization said to be of A − shift·M (the contract also hands over wrong ones)
+     * @return the pairs found by the solver under test
+     */
+    protected abstract Eigenpairs solve(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization factor,
+            int count);
 
     @Test
     @DisplayName("finds the lowest eigenvalues of the 1-D Dirichlet second difference, 4/h² sin²(kπ/(2(n+1))) (Strang)")
@@ -150,6 +160,48 @@ abstract class SymmetricEigensolverContract {
         }
     }
 
+    @Test
+    @DisplayName("a factorization of A − σ'M for another shift than the stated one is caught by the residual check")
+    void factorizationOfAnotherShiftIsCaught() {
+        DMatrixSparseCSC a = TestPencils.laplacian2D(30, 1.0 / 31, false);
+        double[] m = TestPencils.constantDiagonal(30 * 30, 1.0);
+        SymmetricFactorization otherShift = new EjmlCholesky(TestPencils.shifted(a, m, -10.0), null);
+        EigenSolverException failure = assertThrows(EigenSolverException.class,
+                () -> solve(a, m, 0.0, otherShift, 3));
+        assertTrue(failure.getMessage().contains("backward error"), failure.getMessage());
+    }
+
+    @Test
+    @DisplayName("asking for as many pairs as the order is rejected")
+    void askingForAllPairsIsRejected() {
+        DMatrixSparseCSC a = TestPencils.dirichlet1D(5, 1.0);
+        double[] m = TestPencils.constantDiagonal(5, 1.0);
+        IllegalArgumentException failure = assertThrows(IllegalArgumentException.class,
+                () -> solve(a, m, 0.0, new EjmlCholesky(a, null), 5));
+        assertTrue(failure.getMessage().contains("count = 5"), failure.getMessage());
+    }
+
+    @Test
+    @DisplayName("a non-positive entry of M is rejected with its index and value")
+    void nonPositiveMassIsRejected() {
+        DMatrixSparseCSC a = TestPencils.dirichlet1D(5, 1.0);
+        double[] m = {1, 1, 0, 1, 1};
+        IllegalArgumentException failure = assertThrows(IllegalArgumentException.class,
+                () -> solve(a, m, 0.0, new EjmlCholesky(a, null), 2));
+        assertTrue(failure.getMessage().contains("M[2] = 0.0"), failure.getMessage());
+    }
+
+    @Test
+    @DisplayName("a pencil of order 4 with count 3 uses the whole space and still matches the closed form (Strang)")
+    void tinyPencilMatchesClosedForm() {
+        int n = 4;
+        DMatrixSparseCSC a = TestPencils.dirichlet1D(n, 1.0);
+        double[] m = TestPencils.constantDiagonal(n, 1.0);
+        Eigenpairs pairs = lowestPairs(a, m, -0.1, 3);
+        assertValuesMatch(Arrays.copyOf(TestPencils.dirichlet1DEigenvalues(n, 1.0), 3), pairs.values(),
+                EIGENVALUE_TOLERANCE);
+        assertAccuratePairs(a, m, pairs);
+    }
     static void assertValuesMatch(double[] expected, double[] actual, double relativeTolerance) {
         assertEquals(expected.length, actual.length, "number of eigenvalues");
         for (int k = 0; k < expected.length; k++) {
