@@ -5,26 +5,15 @@ import java.util.Map;
 import org.sectio.geometry.GuideSection;
 
 /** "circular": a circle centred at the origin. Default radius 11 mm (TE11 cutoff about 7.99 GHz). */
-final class CircularFamily implements GuideFamily {
+final class CircularFamily extends ListedFamily {
 
     static final double DEFAULT_RADIUS = 11.0e-3;
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("radius", "inner radius of the tube", DEFAULT_RADIUS, "> 0"));
 
-    @Override
-    public String name() {
-        return "circular";
-    }
-
-    @Override
-    public String description() {
-        return "circular guide centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    CircularFamily() {
+        super("circular", "circular guide centred at the origin", PARAMETERS);
     }
 
     @Override

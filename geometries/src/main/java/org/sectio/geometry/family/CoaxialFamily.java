@@ -11,25 +11,14 @@ import org.sectio.geometry.Region;
  * interior, so the section has two conductors (and one TEM mode). Defaults 3.5 mm and 1.52 mm: an
  * air line of about 50 Ω (60 Ω · ln(R/r)).
  */
-final class CoaxialFamily implements GuideFamily {
+final class CoaxialFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("outer_radius", "inner radius of the outer conductor", 3.5e-3, "> 0"),
             FamilyParameter.length("inner_radius", "radius of the centre conductor", 1.52e-3, "> 0 and < outer_radius"));
 
-    @Override
-    public String name() {
-        return "coaxial";
-    }
-
-    @Override
-    public String description() {
-        return "coaxial line: a centre conductor inside a tube, both centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    CoaxialFamily() {
+        super("coaxial", "coaxial line: a centre conductor inside a tube, both centred at the origin", PARAMETERS);
     }
 
     @Override

@@ -9,25 +9,14 @@ import org.sectio.geometry.Outline;
  * "elliptical": an ellipse centred at the origin, major axis along x, traced as four exact quarter
  * arcs of the ellipse (x/a)² + (y/b)² = 1. Equal semi-axes give the circle.
  */
-final class EllipticalFamily implements GuideFamily {
+final class EllipticalFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("semi_major", "semi-major axis a, along x", 12.0e-3, "> 0"),
             FamilyParameter.length("semi_minor", "semi-minor axis b, along y", 8.0e-3, "> 0 and ≤ semi_major"));
 
-    @Override
-    public String name() {
-        return "elliptical";
-    }
-
-    @Override
-    public String description() {
-        return "elliptical guide centred at the origin, major axis along x";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    EllipticalFamily() {
+        super("elliptical", "elliptical guide centred at the origin, major axis along x", PARAMETERS);
     }
 
     @Override

@@ -10,7 +10,7 @@ import org.sectio.geometry.GuideSection;
  * the ridges' feet filleted. Ridges narrower than the gap keep neighbouring ridges apart; then every
  * fillet allowed by the depth also fits beside its ridge.
  */
-final class QuadRidgeFamily implements GuideFamily {
+final class QuadRidgeFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("side", "inner side of the square", 20.0e-3, "> 0"),
@@ -21,19 +21,8 @@ final class QuadRidgeFamily implements GuideFamily {
             FamilyParameter.length("fillet_radius", "radius of the concave fillets where a ridge meets its wall", 0,
                     "≥ 0 and ≤ ridge depth ((side − gap) / 2)"));
 
-    @Override
-    public String name() {
-        return "quad_ridge";
-    }
-
-    @Override
-    public String description() {
-        return "quad-ridge guide: a square with a centred ridge on each wall, centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    QuadRidgeFamily() {
+        super("quad_ridge", "quad-ridge guide: a square with a centred ridge on each wall, centred at the origin", PARAMETERS);
     }
 
     @Override

@@ -6,7 +6,7 @@ import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Outline;
 
 /** "rectangular": a plain rectangle, centred at the origin, width along x. Defaults: WR-90 (22.86 × 10.16 mm). */
-final class RectangularFamily implements GuideFamily {
+final class RectangularFamily extends ListedFamily {
 
     static final double WR90_WIDTH = 22.86e-3;
     static final double WR90_HEIGHT = 10.16e-3;
@@ -15,19 +15,8 @@ final class RectangularFamily implements GuideFamily {
             FamilyParameter.length("width", "inner broad side a, along x", WR90_WIDTH, "> 0"),
             FamilyParameter.length("height", "inner narrow side b, along y", WR90_HEIGHT, "> 0"));
 
-    @Override
-    public String name() {
-        return "rectangular";
-    }
-
-    @Override
-    public String description() {
-        return "rectangular guide width × height, centred at the origin, width along x";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    RectangularFamily() {
+        super("rectangular", "rectangular guide width × height, centred at the origin, width along x", PARAMETERS);
     }
 
     @Override

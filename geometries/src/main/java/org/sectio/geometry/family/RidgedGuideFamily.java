@@ -11,24 +11,31 @@ import org.sectio.geometry.GuideSection;
  * corners may be rounded (ridge_corner_radius) and the re-entrant corners at the ridge's foot filled
  * with concave fillets (fillet_radius).
  */
-final class RidgedGuideFamily implements GuideFamily {
+final class RidgedGuideFamily extends ListedFamily {
 
-    private final String name;
     private final int ridgesAcross;
-    private final List<FamilyParameter> parameters;
 
     /**
      * @param name the family name
      * @param ridgesAcross 1 (ridge on the top wall) or 2 (ridges on both broad walls)
      */
     RidgedGuideFamily(String name, int ridgesAcross) {
+        super(name, description(ridgesAcross), parameters(ridgesAcross));
+        this.ridgesAcross = ridgesAcross;
+    }
+
+    private static String description(int ridgesAcross) {
         if (ridgesAcross != 1 && ridgesAcross != 2) {
             throw new IllegalArgumentException("a ridged rectangle has 1 or 2 ridges across, got " + ridgesAcross);
         }
-        this.name = name;
-        this.ridgesAcross = ridgesAcross;
+        return ridgesAcross == 1
+                ? "single-ridge guide: a rectangle with a centred ridge on its top broad wall, centred at the origin"
+                : "double-ridge guide: a rectangle with facing centred ridges on both broad walls, centred at the origin";
+    }
+
+    private static List<FamilyParameter> parameters(int ridgesAcross) {
         String depth = ridgesAcross == 1 ? "ridge depth (height − gap)" : "ridge depth ((height − gap) / 2)";
-        this.parameters = List.of(
+        return List.of(
                 FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
                 FamilyParameter.length("height", "inner narrow side b, along y", RectangularFamily.WR90_HEIGHT, "> 0"),
                 FamilyParameter.length("ridge_width", "width of each ridge, along x", RectangularFamily.WR90_WIDTH / 4,
@@ -42,25 +49,8 @@ final class RidgedGuideFamily implements GuideFamily {
     }
 
     @Override
-    public String name() {
-        return name;
-    }
-
-    @Override
-    public String description() {
-        return ridgesAcross == 1
-                ? "single-ridge guide: a rectangle with a centred ridge on its top broad wall, centred at the origin"
-                : "double-ridge guide: a rectangle with facing centred ridges on both broad walls, centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return parameters;
-    }
-
-    @Override
     public GuideSection build(Map<String, Double> values) {
-        ParameterValues v = ParameterValues.resolve(name, parameters, values);
+        ParameterValues v = ParameterValues.resolve(name(), parameters(), values);
         v.requirePositive("width");
         v.requirePositive("height");
         double width = v.get("width");
@@ -80,7 +70,7 @@ final class RidgedGuideFamily implements GuideFamily {
                 "≥ 0, ≤ ridge_width / 2 (" + ParameterValues.mm(ridgeWidth / 2) + ") and ≤ ridge depth − fillet_radius ("
                         + ParameterValues.mm(depth - fillet) + ")");
         RidgeNotch ridge = new RidgeNotch(ridgeWidth, depth, corner, fillet);
-        String shownName = name + " " + v.shown("width") + " × " + v.shown("height") + ", ridge " + v.shown("ridge_width")
+        String shownName = name() + " " + v.shown("width") + " × " + v.shown("height") + ", ridge " + v.shown("ridge_width")
                 + ", gap " + v.shown("gap");
         return GuideSection.airFilled(shownName, RidgedRectangle.outline(width, height,
                 ridgesAcross == 2 ? ridge : null, null, ridge, null));

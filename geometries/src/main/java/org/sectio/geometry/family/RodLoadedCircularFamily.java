@@ -13,7 +13,7 @@ import org.sectio.geometry.Region;
  * rod (rod_radius), a dielectric liner on its wall (liner_thickness, an annulus), or both, of one
  * material. For a liner alone set rod_radius to 0; at least one of the two must be present.
  */
-final class RodLoadedCircularFamily implements GuideFamily {
+final class RodLoadedCircularFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("radius", "inner radius of the tube", CircularFamily.DEFAULT_RADIUS, "> 0"),
@@ -24,19 +24,8 @@ final class RodLoadedCircularFamily implements GuideFamily {
             DielectricParameters.PERMITTIVITY,
             DielectricParameters.LOSS_TANGENT);
 
-    @Override
-    public String name() {
-        return "rod_loaded_circular";
-    }
-
-    @Override
-    public String description() {
-        return "circular guide with a concentric dielectric rod and/or a dielectric liner, centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    RodLoadedCircularFamily() {
+        super("rod_loaded_circular", "circular guide with a concentric dielectric rod and/or a dielectric liner, centred at the origin", PARAMETERS);
     }
 
     @Override

@@ -10,7 +10,7 @@ import org.sectio.geometry.GuideSection;
  * the short side is the stadium (obround), built without its vanished straight sides, and a square
  * with radius half its side is a circle of four quarter arcs.
  */
-final class RoundedRectangularFamily implements GuideFamily {
+final class RoundedRectangularFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
@@ -18,19 +18,8 @@ final class RoundedRectangularFamily implements GuideFamily {
             FamilyParameter.length("corner_radius", "radius of the four rounded inner corners", 1.0e-3,
                     "≥ 0 and ≤ half the shorter side"));
 
-    @Override
-    public String name() {
-        return "rounded_rectangular";
-    }
-
-    @Override
-    public String description() {
-        return "rectangular guide with rounded inner corners, centred at the origin, width along x";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    RoundedRectangularFamily() {
+        super("rounded_rectangular", "rectangular guide with rounded inner corners, centred at the origin, width along x", PARAMETERS);
     }
 
     @Override

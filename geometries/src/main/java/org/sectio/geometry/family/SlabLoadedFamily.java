@@ -13,7 +13,7 @@ import org.sectio.geometry.Region;
  * parallel to the narrow walls. The slab's centre is at x = slab_centre (0: the guide's centre line;
  * ± (width − slab_width) / 2: against a narrow wall).
  */
-final class SlabLoadedFamily implements GuideFamily {
+final class SlabLoadedFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
@@ -24,19 +24,8 @@ final class SlabLoadedFamily implements GuideFamily {
             DielectricParameters.PERMITTIVITY,
             DielectricParameters.LOSS_TANGENT);
 
-    @Override
-    public String name() {
-        return "slab_loaded";
-    }
-
-    @Override
-    public String description() {
-        return "rectangular guide with a full-height dielectric slab parallel to the narrow walls, centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    SlabLoadedFamily() {
+        super("slab_loaded", "rectangular guide with a full-height dielectric slab parallel to the narrow walls, centred at the origin", PARAMETERS);
     }
 
     @Override

@@ -12,7 +12,7 @@ import org.sectio.geometry.Region;
  * "slab_on_broad_wall": an air-filled rectangle centred at the origin with a full-width dielectric
  * layer lying on its bottom broad wall (y from −height/2 to −height/2 + slab_thickness).
  */
-final class SlabOnBroadWallFamily implements GuideFamily {
+final class SlabOnBroadWallFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
             FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
@@ -22,19 +22,8 @@ final class SlabOnBroadWallFamily implements GuideFamily {
             DielectricParameters.PERMITTIVITY,
             DielectricParameters.LOSS_TANGENT);
 
-    @Override
-    public String name() {
-        return "slab_on_broad_wall";
-    }
-
-    @Override
-    public String description() {
-        return "rectangular guide with a full-width dielectric layer on its bottom broad wall, centred at the origin";
-    }
-
-    @Override
-    public List<FamilyParameter> parameters() {
-        return PARAMETERS;
+    SlabOnBroadWallFamily() {
+        super("slab_on_broad_wall", "rectangular guide with a full-width dielectric layer on its bottom broad wall, centred at the origin", PARAMETERS);
     }
 
     @Override
