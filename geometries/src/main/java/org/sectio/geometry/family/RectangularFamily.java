@@ -11,9 +11,14 @@ final class RectangularFamily extends ListedFamily {
     static final double WR90_WIDTH = 22.86e-3;
     static final double WR90_HEIGHT = 10.16e-3;
 
+    /** The broad side a of every rectangle-based family, WR-90's by default. */
+    static final FamilyParameter WIDTH = FamilyParameter.length("width", "inner broad side a, along x", WR90_WIDTH, "> 0");
+    /** The narrow side b of every rectangle-based family, WR-90's by default. */
+    static final FamilyParameter HEIGHT = FamilyParameter.length("height", "inner narrow side b, along y", WR90_HEIGHT,
+            "> 0");
+
     private static final List<FamilyParameter> PARAMETERS = List.of(
-            FamilyParameter.length("width", "inner broad side a, along x", WR90_WIDTH, "> 0"),
-            FamilyParameter.length("height", "inner narrow side b, along y", WR90_HEIGHT, "> 0"));
+            WIDTH, HEIGHT);
 
     RectangularFamily() {
         super("rectangular", "rectangular guide width × height, centred at the origin, width along x", PARAMETERS);

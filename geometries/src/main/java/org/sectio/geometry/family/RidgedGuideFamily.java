@@ -36,8 +36,8 @@ final class RidgedGuideFamily extends ListedFamily {
     private static List<FamilyParameter> parameters(int ridgesAcross) {
         String depth = ridgesAcross == 1 ? "ridge depth (height − gap)" : "ridge depth ((height − gap) / 2)";
         return List.of(
-                FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
-                FamilyParameter.length("height", "inner narrow side b, along y", RectangularFamily.WR90_HEIGHT, "> 0"),
+                RectangularFamily.WIDTH,
+                RectangularFamily.HEIGHT,
                 FamilyParameter.length("ridge_width", "width of each ridge, along x", RectangularFamily.WR90_WIDTH / 4,
                         "> 0 and < width"),
                 FamilyParameter.length("gap", ridgesAcross == 1 ? "space between the ridge tip and the bottom wall"

@@ -13,8 +13,8 @@ import org.sectio.geometry.GuideSection;
 final class RoundedRectangularFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
-            FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
-            FamilyParameter.length("height", "inner narrow side b, along y", RectangularFamily.WR90_HEIGHT, "> 0"),
+            RectangularFamily.WIDTH,
+            RectangularFamily.HEIGHT,
             FamilyParameter.length("corner_radius", "radius of the four rounded inner corners", 1.0e-3,
                     "≥ 0 and ≤ half the shorter side"));
 

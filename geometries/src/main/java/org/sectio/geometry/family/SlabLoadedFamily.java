@@ -16,8 +16,8 @@ import org.sectio.geometry.Region;
 final class SlabLoadedFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
-            FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
-            FamilyParameter.length("height", "inner narrow side b, along y", RectangularFamily.WR90_HEIGHT, "> 0"),
+            RectangularFamily.WIDTH,
+            RectangularFamily.HEIGHT,
             FamilyParameter.length("slab_width", "thickness of the slab, along x", 2.0e-3, "> 0 and ≤ width"),
             FamilyParameter.length("slab_centre", "x of the slab's centre, measured from the guide's centre line", 0,
                     "within ± (width − slab_width) / 2"),

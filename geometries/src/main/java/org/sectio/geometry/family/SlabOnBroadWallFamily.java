@@ -15,8 +15,8 @@ import org.sectio.geometry.Region;
 final class SlabOnBroadWallFamily extends ListedFamily {
 
     private static final List<FamilyParameter> PARAMETERS = List.of(
-            FamilyParameter.length("width", "inner broad side a, along x", RectangularFamily.WR90_WIDTH, "> 0"),
-            FamilyParameter.length("height", "inner narrow side b, along y", RectangularFamily.WR90_HEIGHT, "> 0"),
+            RectangularFamily.WIDTH,
+            RectangularFamily.HEIGHT,
             FamilyParameter.length("slab_thickness", "thickness of the layer on the bottom wall, along y", 1.5e-3,
                     "> 0 and ≤ height"),
             DielectricParameters.PERMITTIVITY,
