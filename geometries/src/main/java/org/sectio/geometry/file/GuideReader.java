@@ -24,6 +24,27 @@ final class GuideReader {
         "rounded_corners", "inner_conductors", "dielectrics", "filling", "conductor", "inner_conductor_metal"};
 
     private final ShapeKinds shapes = new ShapeKinds();
+    private final Map<String, Double> settings;
+
+    /** @param settings parameter values (file units) that replace those the file writes */
+    GuideReader(Map<String, Double> settings) {
+        this.settings = Map.copyOf(settings);
+    }
+
+    /**
+     * @param root the document's top-level object
+     * @return the unit its {@code "units"} names, millimetres when it names none
+     * @throws SectionFileException for an unknown unit
+     */
+    static LengthUnit unit(SectionNode root) throws SectionFileException {
+        if (!root.has("units")) {
+            return LengthUnit.MILLIMETRE;
+        }
+        SectionNode unitNode = root.get("units");
+        String word = unitNode.text();
+        return LengthUnit.forKeyword(word).orElseThrow(() -> unitNode.problem(
+                "unknown units \"" + word + "\", expected one of " + LengthUnit.keywords()));
+    }
 
     /**
      * @param top the document's top-level value
@@ -37,15 +58,14 @@ final class GuideReader {
         if (name != null && name.isEmpty()) {
             throw root.get("name").problem("expected a non-empty name, got an empty string");
         }
-        LengthUnit unit = LengthUnit.MILLIMETRE;
-        if (root.has("units")) {
-            SectionNode unitNode = root.get("units");
-            String word = unitNode.text();
-            unit = LengthUnit.forKeyword(word).orElseThrow(() -> unitNode.problem(
-                    "unknown units \"" + word + "\", expected one of " + LengthUnit.keywords()));
+        LengthUnit unit = unit(root);
+        if (!settings.isEmpty() && !root.has("parameters")) {
+            throw root.problem("no \"parameters\" to set " + SectionNode.quoted(settings.keySet().toArray(
+                    String[]::new)) + " in, expected the file to define them under \"parameters\"");
         }
         Map<String, Double> parameters = root.has("parameters")
-                ? ParameterTable.resolve(root.get("parameters").within(new Scope(unit, Map.of()))) : Map.of();
+                ? ParameterTable.resolve(root.get("parameters").within(new Scope(unit, Map.of())), settings)
+                : Map.of();
         root = root.within(new Scope(unit, parameters));
 
         List<String> kinds = new ArrayList<>();

@@ -37,9 +37,35 @@ final class ParameterTable {
      *     an expression that does not parse, an undefined name, a cycle, or a non-finite value
      */
     static Map<String, Double> resolve(SectionNode object) throws SectionFileException {
+        return resolve(object, Map.of());
+    }
+
+    /**
+     * @param object the value of the {@code "parameters"} key
+     * @param settings values that replace those written for the same names (file units); expressions
+     *     over them are computed from the new values
+     * @return every parameter's value by name, in file order
+     * @throws SectionFileException as {@link #resolve(SectionNode)}, and for a setting whose name the
+     *     file does not define or whose value is not finite
+     */
+    static Map<String, Double> resolve(SectionNode object, Map<String, Double> settings)
+            throws SectionFileException {
         object.requireObject("an object of named numbers or expressions, e.g. {\"a\": 22.86, \"b\": \"a/2\"}");
         ParameterTable table = new ParameterTable(object);
         table.readAll();
+        for (Map.Entry<String, Double> setting : settings.entrySet()) {
+            String name = setting.getKey();
+            if (!table.nodes.containsKey(name)) {
+                throw object.problem("no parameter \"" + name + "\" to set, expected one of "
+                        + SectionNode.quoted(table.nodes.keySet().toArray(String[]::new)));
+            }
+            if (!Double.isFinite(setting.getValue())) {
+                throw table.nodes.get(name).problem("the value set for \"" + name + "\" is " + setting.getValue()
+                        + ", expected a finite number");
+            }
+            table.expressions.remove(name);
+            table.values.put(name, setting.getValue());
+        }
         for (String name : table.nodes.keySet()) {
             table.value(name);
         }

@@ -5,6 +5,7 @@ import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Map;
 import org.sectio.geometry.CrossSection;
 
 /**
@@ -60,7 +61,40 @@ public final class SectionFiles {
      * @throws SectionFileException if the text is not a valid geometry
      */
     public static CrossSection parse(String fileName, String text) throws SectionFileException {
+        return parse(fileName, text, Map.of());
+    }
+
+    /**
+     * Reads a geometry from text with some of its parameters set to other values, as a sweep does.
+     *
+     * @param fileName the name to use in error messages
+     * @param text the JSON document
+     * @param settings new values by parameter name, in the file's units; every name must be one the
+     *     file defines under {@code "parameters"}, and expressions over it are computed from the new value
+     * @return the cross-section it describes with those values, in metres
+     * @throws SectionFileException if the text is not a valid geometry, a name is not one of its
+     *     parameters, or the new values break a rule (reported where the rule's value is written)
+     */
+    public static CrossSection parse(String fileName, String text, Map<String, Double> settings)
+            throws SectionFileException {
         LocatedDocument document = LocatedDocument.parse(fileName, text);
-        return new GuideReader().read(SectionNode.root(document));
+        return new GuideReader(settings).read(SectionNode.root(document));
+    }
+
+    /**
+     * Reads only the unit and the parameters of a geometry file, without building its walls.
+     *
+     * @param fileName the name to use in error messages
+     * @param text the JSON document
+     * @return its unit and every parameter's resolved value (none if it has no {@code "parameters"})
+     * @throws SectionFileException if the text is not JSON, the unit is unknown or a parameter is bad
+     */
+    public static FileParameters parameters(String fileName, String text) throws SectionFileException {
+        SectionNode root = SectionNode.root(LocatedDocument.parse(fileName, text))
+                .requireObject("a JSON object with a \"wall\", a \"family\" or a \"standard\"");
+        LengthUnit unit = GuideReader.unit(root);
+        Map<String, Double> values = root.has("parameters")
+                ? ParameterTable.resolve(root.get("parameters").within(new Scope(unit, Map.of()))) : Map.of();
+        return new FileParameters(unit, values);
     }
 }
