@@ -8,6 +8,8 @@ import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.sectio.geometry.CrossSection;
+import org.sectio.geometry.family.GuideFamilies;
+import org.sectio.geometry.family.GuideFamily;
 
 /**
  * Setting a file's parameters from outside, as batch work does: new values replace the written ones,
@@ -75,5 +77,32 @@ class SectionFilesSettingsTest {
     void aValueThatBreaksAShapeRuleIsReportedWhereTheRuleApplies() {
         assertEquals("g.json:2:34: $.wall.rectangle.width: must be a positive length in mm, got \"a\" = -1.0",
                 error(GUIDE, Map.of("a", -1.0)));
+    }
+
+    @Test
+    void everyFamilyAsATemplateBuildsItsDefaultGuideExactly() throws Exception {
+        for (GuideFamily family : GuideFamilies.all()) {
+            GuideTemplate template = GuideTemplate.of(family);
+            assertEquals(family.parameters().size(), template.parameters().values().size(), family.name());
+            assertEquals(family.buildDefault().bounds(), template.build(Map.of()).bounds(), family.name());
+        }
+    }
+
+    @Test
+    void aFamilyTemplateTakesLengthsInMillimetres() throws Exception {
+        GuideFamily rectangular = GuideFamilies.all().stream().filter(f -> f.name().equals("rectangular"))
+                .findFirst().orElseThrow();
+        CrossSection s = GuideTemplate.of(rectangular).build(Map.of("width", 40.0));
+        assertEquals(0.040, s.bounds().width(), 1e-15);
+    }
+
+    @Test
+    void aFamilyTemplatesBrokenRuleIsOneLine() {
+        GuideFamily rectangular = GuideFamilies.all().stream().filter(f -> f.name().equals("rectangular"))
+                .findFirst().orElseThrow();
+        SectionFileException e = assertThrows(SectionFileException.class,
+                () -> GuideTemplate.of(rectangular).build(Map.of("width", -3.0)));
+        assertFalse(e.getMessage().contains("\n"));
+        assertEquals(true, e.getMessage().startsWith("family rectangular:1:"), e.getMessage());
     }
 }
