@@ -6,7 +6,8 @@ import org.sectio.geometry.CrossSection;
 
 /**
  * Plans the tensor grid for a cross-section: lines on the bounding box, on every axis-aligned straight
- * wall and on every re-entrant corner, with cells graded toward the corners by {@link GradingRule}.
+ * wall, through every point where a curved boundary turns back ({@link CurveExtremes}) and on every
+ * re-entrant corner, with cells graded toward the corners by {@link GradingRule}.
  *
  * <p>Why plan coarse first: the solver's error estimate re-solves on the grid of every second line and
  * assumes it is the same kind of grid with twice the cell size. So the planner lays out the coarse
@@ -69,12 +70,19 @@ public final class GridPlanner {
             cornerY[c] = corners.get(c).y();
             exponents[c] = corners.get(c).singularExponent();
         }
-        double[] wallX = rule.snapWalls() ? StraightWalls.verticalXs(section) : new double[0];
-        double[] wallY = rule.snapWalls() ? StraightWalls.horizontalYs(section) : new double[0];
+        double[] wallX = rule.snapWalls() ? joined(StraightWalls.verticalXs(section),
+                CurveExtremes.verticalTangentXs(section)) : new double[0];
+        double[] wallY = rule.snapWalls() ? joined(StraightWalls.horizontalYs(section),
+                CurveExtremes.horizontalTangentYs(section)) : new double[0];
         double[] xs = AxisLines.place(b.minX(), b.maxX(), cornerX, wallX,
                 new CornerSpacing(base, cornerX, exponents, rule, reach), rule.mergeShare());
         double[] ys = AxisLines.place(b.minY(), b.maxY(), cornerY, wallY,
                 new CornerSpacing(base, cornerY, exponents, rule, reach), rule.mergeShare());
         return new TensorGrid(xs, ys);
+    }
+
+    private static double[] joined(double[] a, double[] b) {
+        return java.util.stream.DoubleStream.concat(java.util.Arrays.stream(a), java.util.Arrays.stream(b))
+                .sorted().distinct().toArray();
     }
 }

@@ -9,7 +9,9 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.sectio.geometry.CrossSection;
+import org.sectio.geometry.GuideSection;
 import org.sectio.geometry.Shapes;
+import org.sectio.geometry.family.GuideFamilies;
 
 /**
  * The planned grid's promises: it covers the bounding box; every axis-aligned straight wall and every
@@ -59,6 +61,23 @@ class GridPlannerTest {
             }
             for (double y : new double[] {0, (b - CornerShapes.RIDGE_GAP) / 2, (b + CornerShapes.RIDGE_GAP) / 2, b}) {
                 assertTrue(hasLine(grid.yLines(), y), cells + " cells: no line at y = " + y);
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("The quadrant points of a coaxial guide's inner conductor lie on grid lines at every grid size, on both levels")
+    void innerConductorQuadrantPointsAreOnLines() {
+        GuideSection coax = GuideFamilies.byName("coaxial").buildDefault(); // inner radius 1.52 mm at the origin
+        double r = 1.52e-3;
+        for (int cells : new int[] {40, 81, 160, 240}) {
+            TensorGrid grid = GridPlanner.plan(coax, cells);
+            TensorGrid coarse = new TensorGrid(everySecond(grid.xLines()), everySecond(grid.yLines()));
+            for (TensorGrid g : new TensorGrid[] {grid, coarse}) {
+                for (double at : new double[] {-r, r}) {
+                    assertTrue(hasLine(g.xLines(), at), cells + " cells: no line at x = " + at);
+                    assertTrue(hasLine(g.yLines(), at), cells + " cells: no line at y = " + at);
+                }
             }
         }
     }
