@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.List;
@@ -22,15 +23,18 @@ import org.sectio.operator.PermittivityMap;
  *
  * <p>A solve is: place a grid over the cross-section → cut it by the walls → for each family assemble
  * the pencil, factor it shifted, run shift-invert Lanczos → put the eigenvectors back on the grid.
- * With an error estimate the same is done on a grid with half as many cells across; both schemes
- * converge at second order, so kc(h) − kc(2h) ≈ 3 (kc(h) − kc), and the estimate reported is
- * 2|kc(h) − kc(2h)| / 3: the Richardson error of the fine value with a safety factor of 2, because cut
- * cells make the error of one grid fluctuate about its h² trend.
+ * With an error estimate the same is done on grids with half and a quarter as many cells across (every
+ * second line, twice); both schemes converge at second order, so kc(h) − kc(2h) ≈ 3 (kc(h) − kc), and
+ * the estimate reported is 2|kc(h) − kc(2h)| / (2^p − 1): the Richardson error of the fine value with
+ * a safety factor of 2, because cut cells make the error of one grid fluctuate about its trend, and
+ * with the order p observed on the three grids but held to [1, pMax] ({@link RichardsonEstimate}),
+ * because a first-order part of the cut-cell error can dominate where the h² part is very small. The
+ * quarter grid costs about 1/16 of the fine one.
  *
  * <p>Rule for guides with oblique or curved dielectric interfaces
- * ({@link PermittivityMap#hasOffAxisInterfaces}): there the TE and TM cutoffs are estimated with
- * order 1, 2|kc(h) − kc(2h)| / ((2¹ − 1) kc), because the Hz scheme keeps a small first-order part of
- * its error at such interfaces and the order-2 estimate was measured below the true error.
+ * ({@link PermittivityMap#hasOffAxisInterfaces}): there pMax = 1, because the Hz scheme keeps a small
+ * first-order part of its error at such interfaces and an order-2 estimate was measured below the
+ * true error; elsewhere pMax = 2.
  */
 public final class ModeSolver {
 
@@ -73,16 +77,23 @@ public final class ModeSolver {
         double fineShare = estimate ? 0.8 : 1.0;
         Map<ModeFamily, FamilySolver.Result> fine = solveFamilies(section, grid, settings, progress, 0.0, fineShare);
         Map<ModeFamily, FamilySolver.Result> coarse = null;
+        Map<ModeFamily, FamilySolver.Result> coarsest = null;
         if (estimate) {
             TensorGrid half = everySecondLine(grid);
             try {
-                coarse = half == null ? null : solveFamilies(section, half, settings, progress, fineShare, 1.0);
+                coarse = half == null ? null : solveFamilies(section, half, settings, progress, fineShare, 0.95);
             } catch (SolveException tooCoarse) {
                 coarse = null; // the estimate is then reported as unknown (NaN)
             }
+            TensorGrid quarter = coarse == null ? null : everySecondLine(half);
+            try {
+                coarsest = quarter == null ? null : solveFamilies(section, quarter, settings, progress, 0.95, 1.0);
+            } catch (SolveException tooCoarse) {
+                coarsest = null; // the order is then assumed (see RichardsonEstimate)
+            }
         }
-        // 2^p − 1 for the assumed order p (see the class comment)
-        double richardson = PermittivityMap.hasOffAxisInterfaces(section) ? 1.0 : 3.0;
+        // the highest order to credit (see the class comment)
+        double maximumOrder = PermittivityMap.hasOffAxisInterfaces(section) ? 1.0 : 2.0;
         List<Mode> modes = new ArrayList<>();
         double assembly = 0;
         double factor = 0;
@@ -95,9 +106,11 @@ public final class ModeSolver {
                 double kc = r.cutoffWavenumbers()[k];
                 double err = Double.NaN;
                 if (coarse != null) {
-                    FamilySolver.Result c = coarse.get(r.family());
-                    if (k < c.cutoffWavenumbers().length) {
-                        err = 2.0 * Math.abs(kc - c.cutoffWavenumbers()[k]) / (richardson * kc);
+                    double[] c = coarse.get(r.family()).cutoffWavenumbers();
+                    double[] cc = coarsest == null ? new double[0] : coarsest.get(r.family()).cutoffWavenumbers();
+                    if (k < c.length) {
+                        err = RichardsonEstimate.relativeError(kc, c[k], k < cc.length ? cc[k] : Double.NaN,
+                                maximumOrder);
                     }
                 }
                 // the eigenvalue is k0², so fc = c k0 / (2π) whatever the filling
@@ -106,8 +119,8 @@ public final class ModeSolver {
             }
         }
         modes.addAll(temModes(section, grid, settings));
-        if (coarse != null) {
-            for (FamilySolver.Result r : coarse.values()) {
+        for (var extra : Arrays.asList(coarse, coarsest)) {
+            for (FamilySolver.Result r : extra == null ? List.<FamilySolver.Result>of() : extra.values()) {
                 assembly += r.assemblySeconds();
                 factor += r.factorSeconds();
                 eigen += r.eigenSeconds();

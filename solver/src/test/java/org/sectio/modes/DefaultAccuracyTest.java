@@ -128,19 +128,14 @@ class DefaultAccuracyTest {
     }
 
     @Test
-    @DisplayName("At the defaults the coaxial guide's first six cutoffs (TEM impedance included) are within 1e-4")
-    void coaxialDefaultsMeetTheAccuracyTarget() {
-        // Only the accuracy half of the target is asserted here. KNOWN DEFECT (open): the TE11 doublet's
-        // error at 240 cells is 1.09e-6 against the J1'/Y1' root and the printed estimate 9.52e-7 (ratio
-        // 0.87): the error passes through zero near this grid (its sign changes with h), where a two-grid
-        // estimate cannot bound it. A three-grid guard (max with the 2h/4h trend) fixed nothing here and
-        // over-estimated the rod-loaded guide 11–18×, so it was not kept.
-        GuideSection section = GuideFamilies.byName("coaxial").buildDefault();
-        ModeSet set = ModeSolver.solve(section, SolveSettings.defaults(), SolveProgress.SILENT);
-        for (Mode m : set.modes().subList(0, SHOWN)) {
-            double error = Math.abs(value(m) / converged("coaxial", section, m) - 1);
-            assertTrue(error <= 1e-4, m.label() + ": error " + error);
-        }
+    @DisplayName("At the defaults the coaxial guide's first six cutoffs (TEM impedance included) are within 1e-4 with an honest estimate")
+    void coaxialDefaultsMeetTheirTarget() {
+        // The TE11 doublet converges at an observed order of 1.2–1.4 (errors against the J1'/Y1' root
+        // 3.4e-6, 2.5e-6, 1.07e-6, 4.1e-7 at 60, 120, 240, 480 cells); an estimate that assumed order 2
+        // printed 9.52e-7 for the 1.07e-6 at 240 cells (ratio 0.87). With the order read off three grids
+        // (RichardsonEstimate) it is bounded.
+        List<String> misses = defaultMisses("coaxial");
+        assertTrue(misses.isEmpty(), String.join("\n", misses));
     }
 
     @Test
