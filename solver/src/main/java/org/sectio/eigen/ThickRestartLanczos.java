@@ -140,6 +140,24 @@ public final class ThickRestartLanczos {
         return solveCounted(a, m, shift, shifted, listener, deflated).pairs();
     }
 
+    /**
+     * As {@link #solve(DMatrixSparseCSC, double[], double, SymmetricFactorization, IterationListener,
+     * double[][])}, starting the first cycle from a given vector instead of the seeded random one, e.g.
+     * the sum of the eigenvectors of a nearby pencil of the same pattern (a parameter sweep). Any start
+     * that is not in the span of the deflated vectors gives the same pairs to the tolerance; a start
+     * rich in the wanted eigenvectors needs fewer operator applications. The missed-pair check still
+     * starts from the seeded random vector.
+     *
+     * @param start the first Lanczos vector, length n, finite; not modified; null for the seeded random one
+     * @return the pairs, as there
+     * @throws IllegalArgumentException as there, or if {@code start} has the wrong length or is not finite
+     * @throws EigenSolverException as there
+     */
+    public Eigenpairs solve(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
+            IterationListener listener, double[][] deflated, double[] start) {
+        return solveCounted(a, m, shift, shifted, listener, deflated, start).pairs();
+    }
+
     /** {@link #solve} with the counts of the iteration, for tests and measurements. */
     Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
             IterationListener listener) {
@@ -149,6 +167,12 @@ public final class ThickRestartLanczos {
     /** {@link #solve} with deflated vectors and the counts of the iteration. */
     Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
             IterationListener listener, double[][] deflated) {
+        return solveCounted(a, m, shift, shifted, listener, deflated, null);
+    }
+
+    /** {@link #solve} with deflated vectors, a start vector (or null) and the counts of the iteration. */
+    Solution solveCounted(DMatrixSparseCSC a, double[] m, double shift, SymmetricFactorization shifted,
+            IterationListener listener, double[][] deflated, double[] start) {
         int n = PencilResiduals.checkedOrder(a, m, shifted);
         int d = deflated.length;
         int count = settings.count();
@@ -164,7 +188,12 @@ public final class ThickRestartLanczos {
         ThickRestartCycle cycle = new ThickRestartCycle(basis, shifted, Objects.requireNonNull(listener, "listener"),
                 new Random(settings.seed()), n);
         double tolerance = settings.relativeTolerance();
-        cycle.randomStart(d);
+        if (start == null) {
+            cycle.randomStart(d);
+        } else {
+            requireStart(start, n);
+            System.arraycopy(start, 0, basis.vector(d), 0, n);
+        }
         ThickRestartCycle.Outcome found = cycle.run(d, space, count, settings.maxRestarts(),
                 (theta, estimates) -> allConverged(theta, estimates, 0, count, tolerance), tolerance);
         int restarts = found.restarts();
@@ -192,6 +221,17 @@ public final class ThickRestartLanczos {
         }
         Eigenpairs pairs = checkedPairs(a, m, shift, values, basis, d, cycle.applications(), restarts);
         return new Solution(pairs, restarts, misses, checkApplications);
+    }
+
+    private static void requireStart(double[] start, int n) {
+        if (start.length != n) {
+            throw new IllegalArgumentException("start vector has length " + start.length + " for a pencil of order " + n);
+        }
+        for (double v : start) {
+            if (!Double.isFinite(v)) {
+                throw new IllegalArgumentException("start vector holds a non-finite value " + v);
+            }
+        }
     }
 
     private static boolean allConverged(double[] theta, double[] estimates, int from, int count, double tolerance) {

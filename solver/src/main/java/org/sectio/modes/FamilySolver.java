@@ -1,5 +1,6 @@
 package org.sectio.modes;
 
+import org.ejml.data.DMatrixSparseCSC;
 import org.sectio.eigen.Eigenpairs;
 import org.sectio.eigen.EigenSolverException;
 import org.sectio.eigen.LanczosSettings;
@@ -67,6 +68,15 @@ final class FamilySolver {
     /** As above with dielectrics: eigenvalues are k0², and the shift is divided by the largest εr. */
     static Result solve(ModeFamily family, CutCells cells, PermittivityMap medium, int count, int threads,
                         SolveProgress progress, double progressFrom, double progressTo) {
+        return solve(family, cells, medium, count, threads, progress, progressFrom, progressTo, null);
+    }
+
+    /**
+     * As above, reusing what {@code session} remembers of this pattern (the symbolic analysis, and with
+     * warm starts the last eigenvectors); null for a solve that shares nothing.
+     */
+    static Result solve(ModeFamily family, CutCells cells, PermittivityMap medium, int count, int threads,
+                        SolveProgress progress, double progressFrom, double progressTo, SolveSession session) {
         long t0 = System.nanoTime();
         LatticePencil pencil = pencil(family, cells, medium);
         int n = pencil.size();
@@ -80,8 +90,10 @@ final class FamilySolver {
         long t1 = System.nanoTime();
         progress.report(family + ": factorizing " + n + " unknowns", progressFrom + 0.2 * (progressTo - progressFrom));
         SymmetricFactorization factor;
+        DMatrixSparseCSC shifted = pencil.shifted(sigma);
         try {
-            factor = MultifrontalCholesky.factor(pencil.shifted(sigma), pencil.column(), pencil.row(), threads);
+            factor = session == null ? MultifrontalCholesky.factor(shifted, pencil.column(), pencil.row(), threads)
+                    : session.analysis(family, shifted, pencil.column(), pencil.row()).factor(shifted, threads);
         } catch (NotPositiveDefiniteException e) {
             throw new SolveException(family + ": the shifted matrix is not positive definite (" + e.getMessage()
                     + "); the cross-section may have a disconnected or degenerate region", e);
@@ -91,16 +103,24 @@ final class FamilySolver {
         ThickRestartLanczos lanczos = new ThickRestartLanczos(LanczosSettings.forCount(count)
                 .withLanczosVectors(Math.min(n - deflated.length, Math.max(2 * count + 10, 30))));
         Eigenpairs pairs;
+        double[] start = session == null ? null : session.start(family, shifted, pencil.column(), pencil.row());
         try {
             pairs = lanczos.solve(pencil.stiffness(), pencil.mass(), sigma, factor, applications ->
                     progress.report(family + ": Lanczos step " + applications,
                             progressFrom + (0.5 + 0.5 * Math.min(1.0, applications / (3.0 * count)))
-                                    * (progressTo - progressFrom)), deflated);
+                                    * (progressTo - progressFrom)), deflated, start);
         } catch (EigenSolverException e) {
             throw new SolveException(family + ": " + e.getMessage(), e);
         }
         long t3 = System.nanoTime();
         double[] values = pairs.values();
+        if (session != null) {
+            double[][] vectors = new double[values.length][];
+            for (int k = 0; k < vectors.length; k++) {
+                vectors[k] = pairs.vector(k);
+            }
+            session.rememberVectors(family, shifted, pencil.column(), pencil.row(), vectors);
+        }
         if (family == ModeFamily.TE) {
             requireOneZero(values, sigma);
         }

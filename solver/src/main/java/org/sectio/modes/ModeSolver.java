@@ -58,10 +58,27 @@ public final class ModeSolver {
      * @throws SolveException when the problem cannot be solved as asked (with a message for the user)
      */
     public static ModeSet solve(CrossSection section, SolveSettings settings, SolveProgress progress) {
+        return solve(section, settings, progress, null);
+    }
+
+    /**
+     * As {@link #solve(CrossSection, SolveSettings, SolveProgress)}, sharing work with earlier solves of
+     * the same session: the symbolic factorization of a pencil whose pattern was seen before, and with a
+     * warm session the last eigenvectors as the Lanczos start (see {@link SolveSession}). Without warm
+     * starts the result is the same bit for bit as without a session.
+     *
+     * @param session what earlier solves on this thread left to reuse; null to share nothing; used by
+     *     one thread only
+     * @return as there
+     * @throws SolveException as there
+     */
+    public static ModeSet solve(CrossSection section, SolveSettings settings, SolveProgress progress,
+                                SolveSession session) {
         if (!Double.isNaN(settings.targetRelativeError())) {
-            return solve(section, settings.withCellsAcross(cellsForTarget(section, settings, progress)), progress);
+            return solve(section, settings.withCellsAcross(cellsForTarget(section, settings, progress, session)),
+                    progress, session);
         }
-        return solveOnGrid(section, GridPlanner.plan(section, settings.cellsAcross()), settings, progress);
+        return solveOnGrid(section, GridPlanner.plan(section, settings.cellsAcross()), settings, progress, session);
     }
 
     /**
@@ -72,22 +89,27 @@ public final class ModeSolver {
      */
     public static ModeSet solveOnGrid(CrossSection section, TensorGrid grid, SolveSettings settings,
                                       SolveProgress progress) {
+        return solveOnGrid(section, grid, settings, progress, null);
+    }
+
+    private static ModeSet solveOnGrid(CrossSection section, TensorGrid grid, SolveSettings settings,
+                                       SolveProgress progress, SolveSession session) {
         long start = System.nanoTime();
         boolean estimate = settings.estimateError();
         double fineShare = estimate ? 0.8 : 1.0;
-        Map<ModeFamily, FamilySolver.Result> fine = solveFamilies(section, grid, settings, progress, 0.0, fineShare);
+        Map<ModeFamily, FamilySolver.Result> fine = solveFamilies(section, grid, settings, progress, 0.0, fineShare, session);
         Map<ModeFamily, FamilySolver.Result> coarse = null;
         Map<ModeFamily, FamilySolver.Result> coarsest = null;
         if (estimate) {
             TensorGrid half = everySecondLine(grid);
             try {
-                coarse = half == null ? null : solveFamilies(section, half, settings, progress, fineShare, 0.95);
+                coarse = half == null ? null : solveFamilies(section, half, settings, progress, fineShare, 0.95, session);
             } catch (SolveException tooCoarse) {
                 coarse = null; // the estimate is then reported as unknown (NaN)
             }
             TensorGrid quarter = coarse == null ? null : everySecondLine(half);
             try {
-                coarsest = quarter == null ? null : solveFamilies(section, quarter, settings, progress, 0.95, 1.0);
+                coarsest = quarter == null ? null : solveFamilies(section, quarter, settings, progress, 0.95, 1.0, session);
             } catch (SolveException tooCoarse) {
                 coarsest = null; // the order is then assumed (see RichardsonEstimate)
             }
@@ -138,7 +160,7 @@ public final class ModeSolver {
     }
 
     private static Map<ModeFamily, FamilySolver.Result> solveFamilies(CrossSection section, TensorGrid grid,
-            SolveSettings settings, SolveProgress progress, double from, double to) {
+            SolveSettings settings, SolveProgress progress, double from, double to, SolveSession session) {
         progress.report(String.format(Locale.ROOT, "cutting a %d × %d grid", grid.cellsX(), grid.cellsY()), from);
         long cutStart = System.nanoTime();
         CutCells cells = CutCells.of(section, grid);
@@ -150,7 +172,7 @@ public final class ModeSolver {
         for (int f = 0; f < families.size(); f++) {
             ModeFamily family = families.get(f);
             FamilySolver.Result r = FamilySolver.solve(family, cells, medium, settings.modeCount(), settings.threads(),
-                    progress, from + f * share, from + (f + 1) * share);
+                    progress, from + f * share, from + (f + 1) * share, session);
             // the cut cells serve both families; their time is booked to assembly, split evenly
             results.put(family, r.withExtraAssembly(cutSeconds / families.size()));
         }
@@ -217,11 +239,12 @@ public final class ModeSolver {
      * Picks the cells across that meet the target error: a pilot solve gives the error at the pilot grid,
      * and second-order convergence scales it as (pilot / cells)².
      */
-    private static int cellsForTarget(CrossSection section, SolveSettings settings, SolveProgress progress) {
+    private static int cellsForTarget(CrossSection section, SolveSettings settings, SolveProgress progress,
+                                      SolveSession session) {
         SolveSettings pilot = new SolveSettings(settings.modeCount(), settings.families(), PILOT_CELLS, Double.NaN,
                 true, settings.threads());
         ModeSet first = solveOnGrid(section, GridPlanner.plan(section, PILOT_CELLS), pilot,
-                (stage, f) -> progress.report("choosing the grid: " + stage, 0.0));
+                (stage, f) -> progress.report("choosing the grid: " + stage, 0.0), session);
         double worst = first.modes().stream().mapToDouble(Mode::relativeErrorEstimate).max().orElse(Double.NaN);
         if (!(worst > 0)) {
             return PILOT_CELLS;

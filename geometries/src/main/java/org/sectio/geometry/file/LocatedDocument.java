@@ -21,8 +21,11 @@ import java.util.Map;
  *
  * <p>NaN and Infinity are accepted as numbers here so that the checks can reject them with a plain
  * message; duplicate keys and content after the top-level value are rejected while reading.
+ *
+ * <p>Public, with {@link SectionNode}, so that the project's other JSON inputs (sweep files) locate
+ * their faults the same way.
  */
-final class LocatedDocument {
+public final class LocatedDocument {
 
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
@@ -47,7 +50,7 @@ final class LocatedDocument {
      * @param text the whole document
      * @throws SectionFileException if the text is not one well-formed JSON value
      */
-    static LocatedDocument parse(String file, String text) throws SectionFileException {
+    public static LocatedDocument parse(String file, String text) throws SectionFileException {
         Reading reading = new Reading();
         try (JsonParser parser = FACTORY.createParser(text)) {
             JsonToken first = parser.nextToken();
@@ -74,7 +77,7 @@ final class LocatedDocument {
     }
 
     /** @return the file name used in messages */
-    String file() {
+    public String file() {
         return file;
     }
 

@@ -16,8 +16,11 @@ import java.util.stream.Collectors;
  * text (or, for a missing key, at the object that lacks it). A number may also be written as an
  * expression string over the file's parameters (see {@link Expression}); its faults point at the
  * character inside the string.
+ *
+ * <p>Public so that the project's other JSON inputs (sweep files) read values and report faults the
+ * same way, {@code file:line:column: $.path: problem}.
  */
-final class SectionNode {
+public final class SectionNode {
 
     private final LocatedDocument document;
     private final DocumentPath path;
@@ -32,7 +35,7 @@ final class SectionNode {
     }
 
     /** @return the top-level value of a document, read in millimetres without parameters */
-    static SectionNode root(LocatedDocument document) {
+    public static SectionNode root(LocatedDocument document) {
         return new SectionNode(document, DocumentPath.ROOT, document.root(), Scope.DEFAULT);
     }
 
@@ -52,12 +55,12 @@ final class SectionNode {
     }
 
     /** @return whether this value is a string */
-    boolean isText() {
+    public boolean isText() {
         return node.isTextual();
     }
 
     /** @return whether this value is a number */
-    boolean isNumber() {
+    public boolean isNumber() {
         return node.isNumber();
     }
 
@@ -86,12 +89,12 @@ final class SectionNode {
     }
 
     /** @return an error pointing at this value */
-    SectionFileException problem(String text) {
+    public SectionFileException problem(String text) {
         return document.errorAtValue(path, text);
     }
 
     /** @throws SectionFileException unless this is an object */
-    SectionNode requireObject(String expected) throws SectionFileException {
+    public SectionNode requireObject(String expected) throws SectionFileException {
         if (!node.isObject()) {
             throw problem("expected " + expected + ", got " + describe(node));
         }
@@ -103,7 +106,7 @@ final class SectionNode {
      *
      * @throws SectionFileException at the first unknown key
      */
-    void allowOnly(String... allowed) throws SectionFileException {
+    public void allowOnly(String... allowed) throws SectionFileException {
         Set<String> known = Set.of(allowed);
         Iterator<String> names = node.fieldNames();
         while (names.hasNext()) {
@@ -116,19 +119,19 @@ final class SectionNode {
     }
 
     /** @return whether this object has the key */
-    boolean has(String key) {
+    public boolean has(String key) {
         return node.has(key);
     }
 
     /** @return the names of this object's keys, in file order */
-    List<String> keys() {
+    public List<String> keys() {
         List<String> names = new ArrayList<>();
         node.fieldNames().forEachRemaining(names::add);
         return names;
     }
 
     /** @throws SectionFileException if the key is absent */
-    SectionNode get(String key) throws SectionFileException {
+    public SectionNode get(String key) throws SectionFileException {
         if (!node.has(key)) {
             throw problem("missing key \"" + key + "\"");
         }
@@ -136,7 +139,7 @@ final class SectionNode {
     }
 
     /** @return the text of this string value */
-    String text() throws SectionFileException {
+    public String text() throws SectionFileException {
         if (!node.isTextual()) {
             throw problem("expected a string, got " + describe(node));
         }
@@ -148,7 +151,7 @@ final class SectionNode {
      * @throws SectionFileException if it is neither, if the expression does not parse or evaluate
      *     (pointing at the character inside the string), or if the value is not finite
      */
-    double number() throws SectionFileException {
+    public double number() throws SectionFileException {
         double value;
         if (node.isTextual()) {
             Expression expression = expression();
@@ -198,7 +201,7 @@ final class SectionNode {
     }
 
     /** @return this number, which must lie in [min, max] (what it is, for the message) */
-    double numberIn(double min, double max, String what) throws SectionFileException {
+    public double numberIn(double min, double max, String what) throws SectionFileException {
         double value = number();
         if (!(value >= min && value <= max)) {
             throw problem("expected " + what + ", got " + written(value));
@@ -207,7 +210,7 @@ final class SectionNode {
     }
 
     /** @return this boolean */
-    boolean bool() throws SectionFileException {
+    public boolean bool() throws SectionFileException {
         if (!node.isBoolean()) {
             throw problem("expected true or false, got " + describe(node));
         }
@@ -224,7 +227,7 @@ final class SectionNode {
     }
 
     /** @return the elements of this array */
-    List<SectionNode> elements(String expected) throws SectionFileException {
+    public List<SectionNode> elements(String expected) throws SectionFileException {
         if (!node.isArray()) {
             throw problem("expected " + expected + ", got " + describe(node));
         }
@@ -236,7 +239,7 @@ final class SectionNode {
     }
 
     /** @return what this value is, for messages, e.g. {@code an array} or {@code the number 2} */
-    String described() {
+    public String described() {
         return describe(node);
     }
 
