@@ -18,7 +18,8 @@ import picocli.CommandLine.Spec;
  * for a solve or output that failed. Every error is one line on stderr starting with {@code sectio: }.
  */
 @Command(name = "sectio", mixinStandardHelpOptions = true, versionProvider = SectioMain.Version.class,
-        subcommands = {SolveCommand.class, JunctionCommand.class, SweepCommand.class, MergeCommand.class},
+        subcommands = {SolveCommand.class, JunctionCommand.class, SweepCommand.class, MergeCommand.class,
+            SizeCommand.class, ToleranceCommand.class, CornerStudyCommand.class},
         description = "Finds the guided modes (TE and TM cutoffs and field patterns) of hollow metal waveguides.",
         footer = {"", "Exit codes: 0 done, 2 the request cannot be carried out as given, 1 the solve or an output failed."})
 public final class SectioMain implements Callable<Integer> {
