@@ -20,6 +20,8 @@ import org.sectio.physics.ModeAtFrequency;
  * Analyses every mode of a solve at the requested frequencies: identifies the modes, prepares each
  * mode's field once ({@link ModeAnalysis#prepare}) and evaluates it at each frequency, and gathers
  * the result as a {@link FrequencyReport} (for the tables) and a {@link BandSweep} (for the charts).
+ * A partly filled guide's modes above cutoff are hybrid: there {@link HybridFrequencyAnalysis} solves
+ * the full-vector problem at each frequency instead.
  */
 final class FrequencyAnalysis {
 
@@ -52,6 +54,12 @@ final class FrequencyAnalysis {
             }
         }
         List<List<ModeAtFrequency>> figures = new ArrayList<>();
+        if (HybridFrequencyAnalysis.applies(section)) {
+            List<List<ModeAtFrequency>> scalar = scalarFigures(modes, prepared, failures, frequenciesHz, settings);
+            figures = HybridFrequencyAnalysis.figures(section, modes, identities, frequenciesHz, settings, scalar);
+            return new FrequencyReport(result, identities, settings, frequenciesHz, figures, GuideSummary.of(
+                    new ModeSet(result.sectionName(), modes, result.grid(), result.timing()), identities));
+        }
         for (double f : frequenciesHz) {
             List<ModeAtFrequency> row = new ArrayList<>();
             for (int k = 0; k < modes.size(); k++) {
@@ -62,6 +70,21 @@ final class FrequencyAnalysis {
         }
         return new FrequencyReport(result, identities, settings, frequenciesHz, figures, GuideSummary.of(
                 new ModeSet(result.sectionName(), modes, result.grid(), result.timing()), identities));
+    }
+
+    /** The figures of the scalar analysis at every frequency (what a homogeneously filled guide reports). */
+    private static List<List<ModeAtFrequency>> scalarFigures(List<Mode> modes, List<ModeAnalysis> prepared,
+            List<String> failures, double[] frequenciesHz, AnalysisSettings settings) {
+        List<List<ModeAtFrequency>> figures = new ArrayList<>();
+        for (double f : frequenciesHz) {
+            List<ModeAtFrequency> row = new ArrayList<>();
+            for (int k = 0; k < modes.size(); k++) {
+                row.add(prepared.get(k) != null ? prepared.get(k).at(f, settings)
+                        : unanalysed(modes.get(k), f, settings, failures.get(k)));
+            }
+            figures.add(row);
+        }
+        return figures;
     }
 
     /**

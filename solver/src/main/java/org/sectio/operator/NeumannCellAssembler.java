@@ -53,8 +53,7 @@ public final class NeumannCellAssembler {
         int n = 0;
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
-                boolean open = cells.cellArea(i, j) > 0 && hasOpenFace(cells, i, j);
-                unknownOf[j * nx + i] = open ? n++ : -1;
+                unknownOf[j * nx + i] = isUnknown(cells, i, j) ? n++ : -1;
             }
         }
         double[] vertical = new double[(nx + 1) * ny];
@@ -135,6 +134,11 @@ public final class NeumannCellAssembler {
             }
         }
         return new LatticePencil(a.build(), mass, column, row);
+    }
+
+    /** Whether cell (i, j) is an unknown of this scheme: open area and an open face to an open neighbour. */
+    static boolean isUnknown(CutCells cells, int i, int j) {
+        return cells.cellArea(i, j) > 0 && hasOpenFace(cells, i, j);
     }
 
     private static boolean hasOpenFace(CutCells cells, int i, int j) {
