@@ -4,7 +4,8 @@ package org.sectio.eigen;
  * Told of the progress of an iterative eigensolver, for a progress bar or a log.
  *
  * <p>It is called on the solving thread after every application of the shift-inverted operator
- * ({@code K⁻¹ M}, one sparse triangular solve pair each), so it must be cheap and must not throw.
+ * ({@code K⁻¹ M}, one sparse triangular solve pair each), so it must be cheap. It may throw an unchecked
+ * exception only to abandon the iteration (a cancelled solve): that exception leaves the solver unchanged.
  */
 @FunctionalInterface
 public interface IterationListener {
