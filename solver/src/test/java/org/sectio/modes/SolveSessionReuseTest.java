@@ -54,7 +54,7 @@ class SolveSessionReuseTest {
         SolveSession session = SolveSession.createWarm();
         List<ModeSet> warm = sweep(circles, session);
         List<ModeSet> alone = sweep(circles, null);
-        assertEquals(2 * 2 * (circles.size() - 1), session.warmStarts(), "two families on two grids, all but the first point");
+        assertEquals(2 * 3 * (circles.size() - 1), session.warmStarts(), "two families on three grids (h, 2h, 4h), all but the first point");
         double worst = 0;
         for (int p = 0; p < circles.size(); p++) {
             for (int k = 0; k < SETTINGS.modeCount(); k++) {
