@@ -41,7 +41,8 @@ public final class ModeSolver {
     /** Speed of light in vacuum, m/s (exact, SI 2019). */
     public static final double SPEED_OF_LIGHT = 299_792_458.0;
 
-    private static final int PILOT_CELLS = 48;
+    /** Cells across of the pilot solve that measures the error for a target accuracy. */
+    public static final int PILOT_CELLS = 48;
 
     private ModeSolver() {
     }
@@ -246,14 +247,28 @@ public final class ModeSolver {
         ModeSet first = solveOnGrid(section, GridPlanner.plan(section, PILOT_CELLS), pilot,
                 (stage, f) -> progress.report("choosing the grid: " + stage, 0.0), session);
         double worst = first.modes().stream().mapToDouble(Mode::relativeErrorEstimate).max().orElse(Double.NaN);
-        if (!(worst > 0)) {
+        return cellsForError(worst, settings.targetRelativeError());
+    }
+
+    /**
+     * The grid rule behind a target accuracy, for callers that run their own pilot solves on
+     * {@link #PILOT_CELLS} cells (batch work choosing one grid for many guides): second-order
+     * convergence scales the pilot's error as (pilot / cells)², with a margin of 15 %.
+     *
+     * @param pilotError the largest relative error estimate of the pilot solves (NaN or ≤ 0: none known)
+     * @param target the wanted relative error, 1e-7 … 0.1
+     * @return the cells across, ≥ {@link #PILOT_CELLS}
+     * @throws SolveException if the grid would exceed {@link SolveSettings#MAX_CELLS}
+     */
+    public static int cellsForError(double pilotError, double target) {
+        if (!(pilotError > 0)) {
             return PILOT_CELLS;
         }
-        double cells = PILOT_CELLS * Math.sqrt(worst / settings.targetRelativeError()) * 1.15;
+        double cells = PILOT_CELLS * Math.sqrt(pilotError / target) * 1.15;
         if (cells > SolveSettings.MAX_CELLS) {
             throw new SolveException(String.format(Locale.ROOT, "an accuracy of %.2g needs about %.0f cells across,"
-                    + " more than the limit of %d; ask for a looser accuracy or fewer modes",
-                    settings.targetRelativeError(), cells, SolveSettings.MAX_CELLS));
+                    + " more than the limit of %d; ask for a looser accuracy or fewer modes", target, cells,
+                    SolveSettings.MAX_CELLS));
         }
         return Math.max(PILOT_CELLS, (int) Math.ceil(cells));
     }

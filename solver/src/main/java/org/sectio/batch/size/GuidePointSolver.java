@@ -1,6 +1,5 @@
 package org.sectio.batch.size;
 
-import java.util.Locale;
 import java.util.Map;
 import org.sectio.geometry.CrossSection;
 import org.sectio.geometry.file.GuideTemplate;
@@ -25,7 +24,7 @@ import org.sectio.physics.GuideSummary;
 public final class GuidePointSolver {
 
     /** Cells across of the pilot solve that measures the error (as {@code ModeSolver} does for a target). */
-    static final int PILOT_CELLS = 48;
+    static final int PILOT_CELLS = ModeSolver.PILOT_CELLS;
 
     private final GuideTemplate template;
     private final Map<String, Double> fixedValues;
@@ -105,15 +104,6 @@ public final class GuidePointSolver {
                 }
             }
         }
-        if (!(worst > 0)) {
-            return PILOT_CELLS;
-        }
-        double cells = PILOT_CELLS * Math.sqrt(worst / target) * 1.15;
-        if (cells > SolveSettings.MAX_CELLS) {
-            throw new SolveException(String.format(Locale.ROOT, "a relative accuracy of %.2g needs about %.0f cells"
-                    + " across, more than the limit of %d; ask for a looser accuracy", target, cells,
-                    SolveSettings.MAX_CELLS));
-        }
-        return Math.max(PILOT_CELLS, (int) Math.ceil(cells));
+        return ModeSolver.cellsForError(worst, target);
     }
 }
