@@ -211,7 +211,7 @@ public final class ModeSolver {
         for (int m = 0; m < fine.impedances().length; m++) {
             double z = fine.impedances()[m];
             double err = coarse != null && m < coarse.impedances().length
-                    ? 2.0 * Math.abs(z - coarse.impedances()[m]) / (3.0 * z) : Double.NaN;
+                    ? RichardsonEstimate.relativeError(z, coarse.impedances()[m], Double.NaN, 2.0) : Double.NaN;
             out.add(new Mode(ModeFamily.TEM, m + 1, 0.0, 0.0, fine.residuals()[m], err, fine.fields()[m], z));
         }
         return out;
