@@ -1,10 +1,7 @@
 package org.sectio.mesh;
 
-import java.util.ArrayList;
-import java.util.List;
 import java.util.TreeSet;
 import org.sectio.geometry.CrossSection;
-import org.sectio.geometry.Dielectric;
 import org.sectio.geometry.WallPiece;
 
 /**
@@ -34,7 +31,7 @@ public final class CurveExtremes {
     /** @return the x, m, of every point of a curved boundary where its tangent is vertical, ascending */
     public static double[] verticalTangentXs(CrossSection section) {
         TreeSet<Double> xs = new TreeSet<>();
-        for (WallPiece p : boundaries(section)) {
+        for (WallPiece p : StraightWalls.boundaries(section)) {
             for (boolean atStart : new boolean[] {true, false}) {
                 double[] d = probe(p, atStart);
                 if (d != null && Math.abs(d[0]) < FLAT * Math.abs(d[1])) {
@@ -42,13 +39,13 @@ public final class CurveExtremes {
                 }
             }
         }
-        return unboxed(xs);
+        return StraightWalls.unboxed(xs);
     }
 
     /** @return the y, m, of every point of a curved boundary where its tangent is horizontal, ascending */
     public static double[] horizontalTangentYs(CrossSection section) {
         TreeSet<Double> ys = new TreeSet<>();
-        for (WallPiece p : boundaries(section)) {
+        for (WallPiece p : StraightWalls.boundaries(section)) {
             for (boolean atStart : new boolean[] {true, false}) {
                 double[] d = probe(p, atStart);
                 if (d != null && Math.abs(d[1]) < FLAT * Math.abs(d[0])) {
@@ -56,7 +53,7 @@ public final class CurveExtremes {
                 }
             }
         }
-        return unboxed(ys);
+        return StraightWalls.unboxed(ys);
     }
 
     /** (Δx, Δy) a small step inside a curved piece from one end, or null for a straight piece. */
@@ -74,17 +71,5 @@ public final class CurveExtremes {
         double from = atStart ? t0 : t1;
         double to = from + (atStart ? 1 : -1) * PROBE * (t1 - t0);
         return new double[] {p.x(to) - p.x(from), p.y(to) - p.y(from)};
-    }
-
-    private static List<WallPiece> boundaries(CrossSection section) {
-        List<WallPiece> all = new ArrayList<>(section.wallPieces());
-        for (Dielectric d : section.dielectrics()) {
-            all.addAll(d.region().pieces());
-        }
-        return all;
-    }
-
-    private static double[] unboxed(TreeSet<Double> values) {
-        return values.stream().mapToDouble(Double::doubleValue).toArray();
     }
 }

@@ -47,7 +47,8 @@ public final class StraightWalls {
         return unboxed(ys);
     }
 
-    private static List<WallPiece> boundaries(CrossSection section) {
+    /** @return every metal wall piece and every dielectric face piece of the section */
+    static List<WallPiece> boundaries(CrossSection section) {
         List<WallPiece> all = new ArrayList<>(section.wallPieces());
         for (Dielectric d : section.dielectrics()) {
             all.addAll(d.region().pieces());
@@ -55,7 +56,7 @@ public final class StraightWalls {
         return all;
     }
 
-    private static double[] unboxed(TreeSet<Double> values) {
+    static double[] unboxed(TreeSet<Double> values) {
         List<Double> list = List.copyOf(values);
         double[] out = new double[list.size()];
         for (int k = 0; k < out.length; k++) {
