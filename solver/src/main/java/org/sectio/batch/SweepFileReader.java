@@ -1,8 +1,6 @@
 package org.sectio.batch;
 
 import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -17,6 +15,7 @@ import org.sectio.geometry.family.GuideFamilies;
 import org.sectio.geometry.file.GuideTemplate;
 import org.sectio.geometry.file.LocatedDocument;
 import org.sectio.geometry.file.SectionFileException;
+import org.sectio.geometry.file.SectionFiles;
 import org.sectio.geometry.file.SectionNode;
 import org.sectio.modes.ModeFamily;
 import org.sectio.modes.SolveSettings;
@@ -46,12 +45,7 @@ public final class SweepFileReader {
      * @throws SectionFileException if either is not valid, with the place
      */
     public static SweepDefinition read(Path file) throws IOException, SectionFileException {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (CharacterCodingException e) {
-            throw new SectionFileException(file.toString(), 1, 1, "$", "not UTF-8 text, expected a UTF-8 JSON file");
-        }
+        String text = SectionFiles.readText(file);
         Path folder = file.toAbsolutePath().getParent();
         return parse(file.toString(), text, folder);
     }

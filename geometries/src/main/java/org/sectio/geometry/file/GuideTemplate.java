@@ -1,9 +1,6 @@
 package org.sectio.geometry.file;
 
 import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
@@ -39,11 +36,7 @@ public final class GuideTemplate {
      * @throws SectionFileException if it is not UTF-8 JSON or its unit or parameters are bad
      */
     public static GuideTemplate of(Path file) throws IOException, SectionFileException {
-        try {
-            return new GuideTemplate(file.toString(), Files.readString(file, StandardCharsets.UTF_8));
-        } catch (CharacterCodingException e) {
-            throw new SectionFileException(file.toString(), 1, 1, "$", "not UTF-8 text, expected a UTF-8 JSON file");
-        }
+        return new GuideTemplate(file.toString(), SectionFiles.readText(file));
     }
 
     /**

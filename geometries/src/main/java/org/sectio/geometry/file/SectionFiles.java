@@ -43,13 +43,23 @@ public final class SectionFiles {
      * @throws SectionFileException if its content is not a valid geometry (including text that is not UTF-8)
      */
     public static CrossSection read(Path file) throws IOException, SectionFileException {
-        String text;
+        return parse(file.toString(), readText(file));
+    }
+
+    /**
+     * Reads a Sectio JSON file (geometry or sweep) as text.
+     *
+     * @param file the file; its name as given appears in error messages
+     * @return its content
+     * @throws IOException if the file cannot be opened or read
+     * @throws SectionFileException if its content is not UTF-8
+     */
+    public static String readText(Path file) throws IOException, SectionFileException {
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            return Files.readString(file, StandardCharsets.UTF_8);
         } catch (CharacterCodingException e) {
             throw new SectionFileException(file.toString(), 1, 1, "$", "not UTF-8 text, expected a UTF-8 JSON file");
         }
-        return parse(file.toString(), text);
     }
 
     /**
