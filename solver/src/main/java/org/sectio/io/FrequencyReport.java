@@ -1,7 +1,6 @@
 package org.sectio.io;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import org.sectio.modes.Mode;
 import org.sectio.modes.ModeIdentity;
@@ -77,7 +76,7 @@ public record FrequencyReport(ModeSet modes, List<ModeIdentity> identities, Anal
      * @return its modes lowest cutoff first (a stable sort: equal cutoffs keep the solve's order)
      */
     public static List<Mode> byCutoff(ModeSet modes) {
-        return modes.modes().stream().sorted(Comparator.comparingDouble(Mode::cutoffFrequencyHz)).toList();
+        return modes.byCutoff();
     }
 
     /** @return true for more than one frequency */

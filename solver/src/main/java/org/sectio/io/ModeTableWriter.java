@@ -9,7 +9,6 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import org.sectio.modes.GridSummary;
@@ -86,16 +85,12 @@ public final class ModeTableWriter {
         });
     }
 
-    private static List<Mode> byCutoff(ModeSet modes) {
-        return modes.modes().stream().sorted(Comparator.comparingDouble(Mode::cutoffFrequencyHz)).toList();
-    }
-
     private static String readable(ModeSet modes) {
         StringBuilder text = new StringBuilder(readableHeader(modes, ""));
         boolean anyTem = modes.modes().stream().anyMatch(m -> m.family() == ModeFamily.TEM);
         text.append(TABLE_HEADER).append(anyTem ? String.format(Locale.ROOT, "  %10s", "Z0 (ohm)") : "").append('\n');
         int number = 1;
-        for (Mode mode : byCutoff(modes)) {
+        for (Mode mode : modes.byCutoff()) {
             boolean tem = mode.family() == ModeFamily.TEM;
             text.append(String.format(Locale.ROOT, "%3d  %-6s  %5d  %14s  %14s  %10s  %9s", number++,
                     mode.family(), mode.index(),
@@ -141,7 +136,7 @@ public final class ModeTableWriter {
     private static String csv(ModeSet modes) {
         StringBuilder text = new StringBuilder(CSV_HEADER).append('\n');
         int number = 1;
-        for (Mode mode : byCutoff(modes)) {
+        for (Mode mode : modes.byCutoff()) {
             boolean tem = mode.family() == ModeFamily.TEM;
             text.append(number++).append(',').append(mode.family()).append(',').append(mode.index()).append(',')
                     .append(tem ? "0" : Double.toString(mode.cutoffFrequencyHz())).append(',')
@@ -180,7 +175,7 @@ public final class ModeTableWriter {
         putNumber(timing, "total_s", time.totalSeconds());
         ArrayNode list = root.putArray("modes");
         int number = 1;
-        for (Mode mode : byCutoff(modes)) {
+        for (Mode mode : modes.byCutoff()) {
             ObjectNode entry = list.addObject();
             entry.put("number", number++);
             entry.put("family", mode.family().name());

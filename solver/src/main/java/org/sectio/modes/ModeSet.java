@@ -1,5 +1,6 @@
 package org.sectio.modes;
 
+import java.util.Comparator;
 import java.util.List;
 
 /**
@@ -14,5 +15,10 @@ public record ModeSet(String sectionName, List<Mode> modes, GridSummary grid, So
 
     public ModeSet {
         modes = List.copyOf(modes);
+    }
+
+    /** @return the modes lowest cutoff frequency first (a stable sort: equal cutoffs keep this set's order) */
+    public List<Mode> byCutoff() {
+        return modes.stream().sorted(Comparator.comparingDouble(Mode::cutoffFrequencyHz)).toList();
     }
 }
