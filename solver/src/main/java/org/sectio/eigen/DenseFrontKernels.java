@@ -159,7 +159,7 @@ final class DenseFrontKernels {
     }
 
     @FunctionalInterface
-    private interface RowRange {
+    interface RowRange {
         void run(int lo, int hi);
     }
 
@@ -167,7 +167,7 @@ final class DenseFrontKernels {
      * Runs {@code body} over {@code [lo, hi)}, split into chunks of equal work when {@code split}
      * (rows of a triangle when {@code triangular}, since row {@code i} then costs {@code i − lo + 1}).
      */
-    private static void forRows(int lo, int hi, boolean split, boolean triangular, RowRange body) {
+    static void forRows(int lo, int hi, boolean split, boolean triangular, RowRange body) {
         if (!split || !ForkJoinTask.inForkJoinPool() || hi - lo < 2 * CHUNKS) {
             body.run(lo, hi);
             return;

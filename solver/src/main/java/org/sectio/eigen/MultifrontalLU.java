@@ -1,6 +1,8 @@
 package org.sectio.eigen;
 
 import java.util.Arrays;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
 import org.ejml.data.DMatrixSparseCSC;
 
 /**
@@ -16,29 +18,41 @@ import org.ejml.data.DMatrixSparseCSC;
  * (2003) 110–140), and every solve is then followed by iterative refinement against the original
  * matrix; {@link #perturbedPivots()} counts them.
  *
- * <p>The factor is immutable; {@link #solve} keeps its working storage local.
+ * <p>The dense work is {@link LuFrontKernels} (blocked, split over workers in large fronts), the
+ * tree walk {@link LuElimination} (sibling subtrees as fork-join tasks) and the solve
+ * {@link LuFrontSubstitution}, with the top two tree levels' subtrees swept independently. The factor
+ * is immutable; {@link #solve} keeps its working storage local and may run from several threads.
  */
 public final class MultifrontalLU {
 
     /** Relative size of a static pivot. */
     static final double STATIC_PIVOT = 1e-10;
     private static final int REFINEMENT_STEPS = 3;
+    /** Tree levels whose sibling subtrees are swept independently in a solve. */
+    private static final int SPLIT_DEPTH = 2;
+    /** Smallest subtree (unknowns) on either side of a split. */
+    private static final int SPLIT_MINIMUM = 10_000;
 
     private final MultifrontalAnalysis analysis;
     private final DMatrixSparseCSC matrix;
-    private final Front[] fronts;
+    private final LuFront[] fronts;
     private final int perturbed;
+    private final boolean parallel;
+    private final int[] firstDescendant;
 
-    /** One front's factor: own block (L unit lower and U, row-major w × w), L21 (b × w), U12 (w × b). */
-    private record Front(int start, int width, int[] boundary, double[] own, double[] lower, double[] upper,
-                         int[] pivots) {
-    }
-
-    private MultifrontalLU(MultifrontalAnalysis analysis, DMatrixSparseCSC matrix, Front[] fronts, int perturbed) {
+    private MultifrontalLU(MultifrontalAnalysis analysis, DMatrixSparseCSC matrix, LuFront[] fronts, int perturbed,
+                           boolean parallel) {
         this.analysis = analysis;
         this.matrix = matrix;
         this.fronts = fronts;
         this.perturbed = perturbed;
+        this.parallel = parallel;
+        DissectionTree tree = analysis.tree();
+        this.firstDescendant = new int[fronts.length];
+        for (int v = 0; v < fronts.length; v++) {
+            int first = tree.firstChild()[v];
+            firstDescendant[v] = first >= 0 ? firstDescendant[first] : v;
+        }
     }
 
     /**
@@ -59,6 +73,10 @@ public final class MultifrontalLU {
          * @throws IllegalArgumentException as {@link MultifrontalAnalysis#analyse}, or if rows are not sorted
          */
         public static Analysis of(DMatrixSparseCSC pattern, int[] column, int[] row) {
+            return of(pattern, column, row, NestedDissection.DEFAULT_LEAF_SIZE);
+        }
+
+        static Analysis of(DMatrixSparseCSC pattern, int[] column, int[] row, int leafSize) {
             int n = pattern.numCols;
             for (int c = 0; c < n; c++) {
                 for (int idx = pattern.col_idx[c] + 1; idx < pattern.col_idx[c + 1]; idx++) {
@@ -68,7 +86,7 @@ public final class MultifrontalLU {
                     }
                 }
             }
-            MultifrontalAnalysis symbolic = MultifrontalAnalysis.analyse(pattern, column, row);
+            MultifrontalAnalysis symbolic = MultifrontalAnalysis.analyse(pattern, column, row, leafSize);
             int[] next = Arrays.copyOf(pattern.col_idx, n);
             int[] transpose = new int[pattern.nz_length];
             for (int c = 0; c < n; c++) {
@@ -80,152 +98,45 @@ public final class MultifrontalLU {
         }
 
         /**
+         * Factors on one thread.
+         *
          * @param a matrix with the analysed pattern, not modified (kept for refinement)
          * @return the factorization
          * @throws IllegalArgumentException if the pattern differs
          */
         public MultifrontalLU factor(DMatrixSparseCSC a) {
-            return MultifrontalLU.factor(this, a);
+            return MultifrontalLU.factor(this, a, 1);
+        }
+
+        /**
+         * @param a matrix with the analysed pattern, not modified (kept for refinement)
+         * @param threads worker threads, ≥ 1; with more than one, solves also use the common fork-join
+         *     pool; the factor and every solve are the same for any thread count
+         * @return the factorization
+         * @throws IllegalArgumentException if the pattern differs or threads &lt; 1
+         */
+        public MultifrontalLU factor(DMatrixSparseCSC a, int threads) {
+            return MultifrontalLU.factor(this, a, threads);
         }
     }
 
-    static MultifrontalLU factor(Analysis analysis, DMatrixSparseCSC a) {
+    static MultifrontalLU factor(Analysis analysis, DMatrixSparseCSC a, int threads) {
         MultifrontalAnalysis symbolic = analysis.symbolic();
         int n = symbolic.size();
         if (a.numCols != n || a.numRows != n || a.nz_length != analysis.transposeIndex().length) {
             throw new IllegalArgumentException("multifrontal LU: matrix " + a.numRows + " × " + a.numCols + " with "
                     + a.nz_length + " entries does not have the analysed pattern of order " + n);
         }
-        DissectionTree tree = symbolic.tree();
-        int[] perm = tree.permutation();
-        int[] position = new int[n];
-        for (int p = 0; p < n; p++) {
-            position[perm[p]] = p;
+        if (threads < 1) {
+            throw new IllegalArgumentException("multifrontal LU: threads must be at least 1, got " + threads);
         }
         double largest = 0;
         for (int k = 0; k < a.nz_length; k++) {
             largest = Math.max(largest, Math.abs(a.nz_values[k]));
         }
-        double tiny = STATIC_PIVOT * largest;
-        int widest = symbolic.largestFront();
-        double[][] f = new double[widest][widest];
-        int[] local = new int[n];
-        int nodes = tree.nodeCount();
-        Front[] fronts = new Front[nodes];
-        double[][] updates = new double[nodes][];
-        int perturbed = 0;
-        int[] transpose = analysis.transposeIndex();
-        for (int v = 0; v < nodes; v++) {
-            int start = tree.columnStart()[v];
-            int end = tree.columnEnd()[v];
-            int w = end - start;
-            int[] boundary = symbolic.boundary(v);
-            int s = w + boundary.length;
-            for (int r = 0; r < s; r++) {
-                Arrays.fill(f[r], 0, s, 0.0);
-            }
-            for (int p = start; p < end; p++) {
-                local[p] = p - start;
-            }
-            for (int i = 0; i < boundary.length; i++) {
-                local[boundary[i]] = w + i;
-            }
-            for (int p = start; p < end; p++) {
-                int k = perm[p];
-                for (int idx = a.col_idx[k]; idx < a.col_idx[k + 1]; idx++) {
-                    int q = position[a.nz_rows[idx]];
-                    if (q >= start) {
-                        f[local[q]][p - start] += a.nz_values[idx];
-                        if (q >= end) {
-                            f[p - start][local[q]] += a.nz_values[transpose[idx]];
-                        }
-                    }
-                }
-            }
-            for (int child : new int[] {tree.firstChild()[v], tree.secondChild()[v]}) {
-                if (child >= 0) {
-                    extendAdd(f, updates[child], symbolic.parentLocal(child));
-                    updates[child] = null;
-                }
-            }
-            int[] pivots = new int[w];
-            perturbed += eliminate(f, w, s, pivots, tiny);
-            double[] own = new double[w * w];
-            double[] lower = new double[boundary.length * w];
-            double[] upper = new double[w * boundary.length];
-            for (int r = 0; r < w; r++) {
-                System.arraycopy(f[r], 0, own, r * w, w);
-                System.arraycopy(f[r], w, upper, r * boundary.length, boundary.length);
-            }
-            for (int i = 0; i < boundary.length; i++) {
-                System.arraycopy(f[w + i], 0, lower, i * w, w);
-            }
-            double[] update = new double[boundary.length * boundary.length];
-            for (int i = 0; i < boundary.length; i++) {
-                System.arraycopy(f[w + i], w, update, i * boundary.length, boundary.length);
-            }
-            updates[v] = update;
-            fronts[v] = new Front(start, w, boundary, own, lower, upper, pivots);
-        }
-        return new MultifrontalLU(symbolic, a, fronts, perturbed);
-    }
-
-    /** Adds a child's square update matrix into the front at rows and columns {@code map}. */
-    private static void extendAdd(double[][] f, double[] update, int[] map) {
-        int b = map.length;
-        for (int i = 0; i < b; i++) {
-            double[] target = f[map[i]];
-            int offset = i * b;
-            for (int j = 0; j < b; j++) {
-                target[map[j]] += update[offset + j];
-            }
-        }
-    }
-
-    /**
-     * Right-looking LU of the first w columns of the s × s front, row pivoting among rows 0 … w−1
-     * (rows are swapped by reference); the trailing block becomes the Schur complement.
-     *
-     * @return the number of perturbed pivots
-     */
-    private static int eliminate(double[][] f, int w, int s, int[] pivots, double tiny) {
-        int perturbed = 0;
-        for (int c = 0; c < w; c++) {
-            int best = c;
-            double size = Math.abs(f[c][c]);
-            for (int r = c + 1; r < w; r++) {
-                double m = Math.abs(f[r][c]);
-                if (m > size) {
-                    size = m;
-                    best = r;
-                }
-            }
-            pivots[c] = best;
-            if (best != c) {
-                double[] swap = f[c];
-                f[c] = f[best];
-                f[best] = swap;
-            }
-            double[] pivotRow = f[c];
-            double d = pivotRow[c];
-            if (Math.abs(d) < tiny) {
-                d = d < 0 ? -tiny : tiny;
-                pivotRow[c] = d;
-                perturbed++;
-            }
-            double inverse = 1.0 / d;
-            for (int r = c + 1; r < s; r++) {
-                double[] row = f[r];
-                double l = row[c] * inverse;
-                row[c] = l;
-                if (l != 0) {
-                    for (int j = c + 1; j < s; j++) {
-                        row[j] -= l * pivotRow[j];
-                    }
-                }
-            }
-        }
-        return perturbed;
+        LuElimination.Result r = LuElimination.eliminate(symbolic, a.nz_values, analysis.transposeIndex(),
+                STATIC_PIVOT * largest, threads);
+        return new MultifrontalLU(symbolic, a, r.fronts(), r.perturbedPivots(), threads > 1);
     }
 
     /** @return the order n */
@@ -241,8 +152,8 @@ public final class MultifrontalLU {
     /** @return stored entries of L and U */
     public long factorNonZeros() {
         long count = 0;
-        for (Front front : fronts) {
-            count += front.own().length + front.lower().length + front.upper().length;
+        for (LuFront front : fronts) {
+            count += front.entries();
         }
         return count;
     }
@@ -282,60 +193,80 @@ public final class MultifrontalLU {
         for (int p = 0; p < n; p++) {
             work[p] = rightHandSide[perm[p]];
         }
-        for (Front front : fronts) {
-            int start = front.start();
-            int w = front.width();
-            int[] pivots = front.pivots();
-            for (int c = 0; c < w; c++) {
-                int other = pivots[c];
-                if (other != c) {
-                    double t = work[start + c];
-                    work[start + c] = work[start + other];
-                    work[start + other] = t;
-                }
-            }
-            double[] own = front.own();
-            for (int r = 0; r < w; r++) {
-                double value = work[start + r];
-                int offset = r * w;
-                for (int c = 0; c < r; c++) {
-                    value -= own[offset + c] * work[start + c];
-                }
-                work[start + r] = value;
-            }
-            int[] boundary = front.boundary();
-            double[] lower = front.lower();
-            for (int i = 0; i < boundary.length; i++) {
-                double sum = 0;
-                int offset = i * w;
-                for (int c = 0; c < w; c++) {
-                    sum += lower[offset + c] * work[start + c];
-                }
-                work[boundary[i]] -= sum;
-            }
-        }
-        for (int v = fronts.length - 1; v >= 0; v--) {
-            Front front = fronts[v];
-            int start = front.start();
-            int w = front.width();
-            int[] boundary = front.boundary();
-            double[] upper = front.upper();
-            double[] own = front.own();
-            for (int r = w - 1; r >= 0; r--) {
-                double value = work[start + r];
-                int offset = r * boundary.length;
-                for (int i = 0; i < boundary.length; i++) {
-                    value -= upper[offset + i] * work[boundary[i]];
-                }
-                int rowOffset = r * w;
-                for (int c = r + 1; c < w; c++) {
-                    value -= own[rowOffset + c] * work[start + c];
-                }
-                work[start + r] = value / own[rowOffset + r];
-            }
-        }
+        int root = fronts.length - 1;
+        forwardSweep(root, 0, work);
+        backwardSweep(root, 0, work);
         for (int p = 0; p < n; p++) {
             solution[perm[p]] = work[p];
         }
+    }
+
+    private boolean splits(int v, int depth) {
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        return depth < SPLIT_DEPTH && second >= 0 && subtreeSize(first) >= SPLIT_MINIMUM
+                && subtreeSize(second) >= SPLIT_MINIMUM;
+    }
+
+    private int subtreeSize(int v) {
+        return analysis.tree().columnEnd()[v] - analysis.tree().subtreeStart()[v];
+    }
+
+    /**
+     * Forward substitution over the subtree of v, ending with v. At a split the second subtree
+     * accumulates its updates of ancestor rows in a private vector added afterwards (as in
+     * {@link MultifrontalCholesky}); where to split depends on the tree only.
+     */
+    private void forwardSweep(int v, int depth, double[] work) {
+        double[] scratch = new double[analysis.largestFront()];
+        if (!splits(v, depth)) {
+            for (int u = firstDescendant[v]; u <= v; u++) {
+                LuFrontSubstitution.forward(fronts[u], work, scratch);
+            }
+            return;
+        }
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        int lo = tree.subtreeStart()[second], hi = tree.columnEnd()[second];
+        double[] privateWork = new double[work.length];
+        System.arraycopy(work, lo, privateWork, lo, hi - lo);
+        runBoth(() -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
+        System.arraycopy(privateWork, lo, work, lo, hi - lo);
+        for (int q : analysis.boundary(second)) {
+            work[q] += privateWork[q];
+        }
+        LuFrontSubstitution.forward(fronts[v], work, scratch);
+    }
+
+    /** Backward substitution over the subtree of v, starting with v. */
+    private void backwardSweep(int v, int depth, double[] work) {
+        double[] scratch = new double[analysis.largestFront()];
+        double[] gathered = new double[analysis.largestFront()];
+        if (!splits(v, depth)) {
+            for (int u = v; u >= firstDescendant[v]; u--) {
+                LuFrontSubstitution.backward(fronts[u], work, scratch, gathered);
+            }
+            return;
+        }
+        LuFrontSubstitution.backward(fronts[v], work, scratch, gathered);
+        DissectionTree tree = analysis.tree();
+        int first = tree.firstChild()[v], second = tree.secondChild()[v];
+        runBoth(() -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
+    }
+
+    private void runBoth(Runnable first, Runnable second) {
+        if (!parallel) {
+            first.run();
+            second.run();
+            return;
+        }
+        ForkJoinTask<?> task = ForkJoinTask.adapt(second);
+        if (ForkJoinTask.inForkJoinPool()) {
+            task.fork();
+        } else {
+            ForkJoinPool.commonPool().execute(task);
+        }
+        first.run();
+        task.join();
     }
 }

@@ -108,9 +108,7 @@ public final class ThickRestartArnoldi {
             double[][] newV = new double[m + 1][];
             for (int c = 0; c < k; c++) {
                 double[] x = new double[n];
-                for (int r = 0; r < m; r++) {
-                    axpy(q[c][r], v[r], x);
-                }
+                addCombination(v, m, q[c], x);
                 newV[c] = x;
             }
             newV[k] = v[m];
@@ -158,19 +156,59 @@ public final class ThickRestartArnoldi {
 
     /** Classical Gram–Schmidt twice against v[0 … count−1]; adds the coefficients to h[·][column] if given. */
     private static double orthogonalize(double[][] v, int count, double[] w, double[][] h, int column) {
+        double[] c = new double[count];
         for (int pass = 0; pass < 2; pass++) {
-            double[] c = new double[count];
+            projections(v, count, w, c);
+            double[] negated = new double[count];
             for (int i = 0; i < count; i++) {
-                c[i] = dot(v[i], w);
-            }
-            for (int i = 0; i < count; i++) {
-                axpy(-c[i], v[i], w);
+                negated[i] = -c[i];
                 if (h != null) {
                     h[i][column] += c[i];
                 }
             }
+            addCombination(v, count, negated, w);
         }
         return Math.sqrt(dot(w, w));
+    }
+
+    /** {@code c[i] = v[i]·w} for i &lt; count, four basis vectors per pass over w. */
+    private static void projections(double[][] v, int count, double[] w, double[] c) {
+        int n = w.length;
+        int i = 0;
+        for (; i + 3 < count; i += 4) {
+            double[] v0 = v[i], v1 = v[i + 1], v2 = v[i + 2], v3 = v[i + 3];
+            double s0 = 0, s1 = 0, s2 = 0, s3 = 0;
+            for (int k = 0; k < n; k++) {
+                double x = w[k];
+                s0 += v0[k] * x;
+                s1 += v1[k] * x;
+                s2 += v2[k] * x;
+                s3 += v3[k] * x;
+            }
+            c[i] = s0;
+            c[i + 1] = s1;
+            c[i + 2] = s2;
+            c[i + 3] = s3;
+        }
+        for (; i < count; i++) {
+            c[i] = dot(v[i], w);
+        }
+    }
+
+    /** {@code x += Σ_{i < count} c[i] v[i]}, four basis vectors per pass. */
+    private static void addCombination(double[][] v, int count, double[] c, double[] x) {
+        int n = x.length;
+        int i = 0;
+        for (; i + 3 < count; i += 4) {
+            double[] v0 = v[i], v1 = v[i + 1], v2 = v[i + 2], v3 = v[i + 3];
+            double c0 = c[i], c1 = c[i + 1], c2 = c[i + 2], c3 = c[i + 3];
+            for (int k = 0; k < n; k++) {
+                x[k] += c0 * v0[k] + c1 * v1[k] + c2 * v2[k] + c3 * v3[k];
+            }
+        }
+        for (; i < count; i++) {
+            axpy(c[i], v[i], x);
+        }
     }
 
     private static double columnNorm(double[][] h, int column) {
@@ -261,11 +299,9 @@ public final class ThickRestartArnoldi {
         for (int[] b : wanted) {
             double[] real = new double[n];
             double[] imag = new double[n];
-            for (int r = 0; r < m; r++) {
-                axpy(blocks.getEntry(r, b[0]), v[r], real);
-                if (b.length == 2) {
-                    axpy(blocks.getEntry(r, b[1]), v[r], imag);
-                }
+            addCombination(v, m, blocks.getColumn(b[0]), real);
+            if (b.length == 2) {
+                addCombination(v, m, blocks.getColumn(b[1]), imag);
             }
             double norm = Math.sqrt(dot(real, real) + dot(imag, imag));
             scale(real, 1.0 / norm);
@@ -292,11 +328,19 @@ public final class ThickRestartArnoldi {
     }
 
     static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
+        double s0 = 0, s1 = 0, s2 = 0, s3 = 0;
+        int n = a.length;
+        int i = 0;
+        for (; i + 3 < n; i += 4) {
+            s0 += a[i] * b[i];
+            s1 += a[i + 1] * b[i + 1];
+            s2 += a[i + 2] * b[i + 2];
+            s3 += a[i + 3] * b[i + 3];
         }
-        return s;
+        for (; i < n; i++) {
+            s0 += a[i] * b[i];
+        }
+        return (s0 + s1) + (s2 + s3);
     }
 
     static void axpy(double alpha, double[] x, double[] y) {

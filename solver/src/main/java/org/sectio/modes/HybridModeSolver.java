@@ -54,12 +54,13 @@ public final class HybridModeSolver {
      */
     public static HybridModeSet solve(CrossSection section, double frequencyHz, SolveSettings settings,
                                       SolveProgress progress) {
-        return prepare(section, GridPlanner.plan(section, settings.cellsAcross()))
+        return prepare(section, GridPlanner.plan(section, settings.cellsAcross()), settings.threads())
                 .solveAt(frequencyHz, settings.modeCount(), Double.NaN, List.of(), progress);
     }
 
     /**
-     * Cuts the grid and assembles the frequency-independent part of the operator.
+     * Cuts the grid and assembles the frequency-independent part of the operator; factorizations
+     * and solves use all cores.
      *
      * @param section the cross-section
      * @param grid a grid covering it
@@ -67,6 +68,23 @@ public final class HybridModeSolver {
      * @throws SolveException if a material is magnetic or the grid is too coarse
      */
     public static Prepared prepare(CrossSection section, TensorGrid grid) {
+        return prepare(section, grid, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * Cuts the grid and assembles the frequency-independent part of the operator.
+     *
+     * @param section the cross-section
+     * @param grid a grid covering it
+     * @param threads worker threads of the factorization and the solves, ≥ 1 (results do not depend on it)
+     * @return the prepared problem, reusable at any frequency (and from several threads)
+     * @throws SolveException if a material is magnetic or the grid is too coarse
+     * @throws IllegalArgumentException if threads &lt; 1
+     */
+    public static Prepared prepare(CrossSection section, TensorGrid grid, int threads) {
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1, got " + threads);
+        }
         long t0 = System.nanoTime();
         CutCells cells = CutCells.of(section, grid);
         PermittivityMap medium;
@@ -84,7 +102,7 @@ public final class HybridModeSolver {
                 pencil.latticeRow());
         GridSummary summary = new GridSummary(grid.cellsX(), grid.cellsY(), grid.x(1) - grid.x(0),
                 grid.y(1) - grid.y(0), pencil.edges().cellCount(), pencil.edges().nodes().unknowns());
-        return new Prepared(section.name(), pencil, symbolic, summary, (System.nanoTime() - t0) * 1e-9);
+        return new Prepared(section.name(), pencil, symbolic, summary, (System.nanoTime() - t0) * 1e-9, threads);
     }
 
     /** A cut and assembled cross-section; {@link #solveAt} may be called for any number of frequencies. */
@@ -95,9 +113,11 @@ public final class HybridModeSolver {
         private final MultifrontalLU.Analysis symbolic;
         private final GridSummary grid;
         private final double assemblySeconds;
+        private final int threads;
 
         Prepared(String sectionName, YeePencil pencil, MultifrontalLU.Analysis symbolic, GridSummary grid,
-                 double assemblySeconds) {
+                 double assemblySeconds, int threads) {
+            this.threads = threads;
             this.sectionName = sectionName;
             this.pencil = pencil;
             this.symbolic = symbolic;
@@ -145,7 +165,7 @@ public final class HybridModeSolver {
                     ? k0 * k0 * pencil.maximumPermittivity() * (1 + TARGET_MARGIN) : targetBetaSquared;
             progress.report(String.format(Locale.ROOT, "hybrid: factorizing %d edge unknowns at %.6g GHz", n,
                     frequencyHz * 1e-9), 0.1);
-            MultifrontalLU lu = symbolic.factor(pencil.shiftedReal(k0, tau));
+            MultifrontalLU lu = symbolic.factor(pencil.shiftedReal(k0, tau), threads);
             long t1 = System.nanoTime();
             double[][] startVectors = starts.stream().map(HybridMode::edgeVectorReal).toArray(double[][]::new);
             int basis = Math.min(n - 1, Math.max(2 * count + 10, 30));
