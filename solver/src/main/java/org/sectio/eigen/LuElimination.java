@@ -10,7 +10,7 @@ import java.util.concurrent.atomic.AtomicInteger;
  * Numeric phase of the multifrontal LU (Duff and Reid, SIAM J. Sci. Stat. Comput. 5 (1984)
  * 633–641): the dissection tree is walked in post-order; each front is assembled from both triangles
  * of its columns and rows plus the extend-add of its children's update matrices, partly factored by
- * {@link LuFrontKernels}, and its factor stored as a {@link LuFront}. As in the Cholesky's
+ * {@link LuFrontKernels}, and its factor stored in the {@link LuFactor}. As in the Cholesky's
  * {@link FrontalElimination}, the two subtrees of a node run as fork-join tasks down to
  * {@link #FORK_DEPTH} and the parent adds its children in a fixed order, so the factor is the same
  * for every thread count.
@@ -26,7 +26,7 @@ final class LuElimination {
     private final int[] transpose;
     private final double tiny;
     private final boolean parallel;
-    private final LuFront[] fronts;
+    private final LuFactor factor;
     private final AtomicInteger perturbed = new AtomicInteger();
     private final ConcurrentLinkedDeque<double[][]> workspaces = new ConcurrentLinkedDeque<>();
 
@@ -38,11 +38,11 @@ final class LuElimination {
         this.transpose = transpose;
         this.tiny = tiny;
         this.parallel = parallel;
-        this.fronts = new LuFront[tree.nodeCount()];
+        this.factor = new LuFactor(analysis);
     }
 
-    /** The factored fronts and the number of pivots replaced by static pivoting. */
-    record Result(LuFront[] fronts, int perturbedPivots) {
+    /** The factor and the number of pivots replaced by static pivoting. */
+    record Result(LuFactor factor, int perturbedPivots) {
     }
 
     /**
@@ -65,7 +65,7 @@ final class LuElimination {
                 pool.shutdown();
             }
         }
-        return new Result(run.fronts, run.perturbed.get());
+        return new Result(run.factor, run.perturbed.get());
     }
 
     /** Eliminates the subtree of v; returns its b × b update matrix, row-major. */
@@ -104,24 +104,24 @@ final class LuElimination {
         if (second >= 0) {
             extendAdd(f, secondUpdate, analysis.parentLocal(second));
         }
-        int[] pivots = new int[w];
-        perturbed.addAndGet(LuFrontKernels.partialLu(f, w, s, pivots, tiny, parallel));
-        double[] own = new double[w * w];
-        double[] lower = new double[b * w];
-        double[] upper = new double[w * b];
+        int[] pivots = factor.pivots();
+        perturbed.addAndGet(LuFrontKernels.partialLu(f, w, s, pivots, start, tiny, parallel));
+        double[] storage = factor.storage(v);
+        int own = factor.offset(v);
+        int lower = own + w * w;
+        int upper = lower + w * b;
         for (int r = 0; r < w; r++) {
-            System.arraycopy(f[r], 0, own, r * w, w);
-            System.arraycopy(f[r], w, upper, r * b, b);
+            System.arraycopy(f[r], 0, storage, own + r * w, w);
+            System.arraycopy(f[r], w, storage, upper + r * b, b);
         }
         double[] update = new double[b * b];
         for (int i = 0; i < b; i++) {
             double[] row = f[w + i];
             for (int c = 0; c < w; c++) {
-                lower[c * b + i] = row[c];
+                storage[lower + c * b + i] = row[c];
             }
             System.arraycopy(row, w, update, i * b, b);
         }
-        fronts[v] = new LuFront(start, w, boundary, own, lower, upper, pivots);
         workspaces.push(f);
         return update;
     }

@@ -36,16 +36,17 @@ final class LuFrontKernels {
      * Eliminates the first {@code width} columns of the {@code size} × {@code size} front in place.
      *
      * @param f rows of the front (each of length ≥ size); rows 0 … width−1 are permuted by reference
-     * @param pivots receives, for each eliminated column c, the row swapped with row c
+     * @param pivots receives at {@code pivotStart + c}, for each eliminated column c, the row swapped with row c
      * @param tiny a pivot smaller in magnitude is replaced by ±tiny (static pivoting)
      * @return the number of replaced pivots
      */
-    static int partialLu(double[][] f, int width, int size, int[] pivots, double tiny, boolean parallel) {
+    static int partialLu(double[][] f, int width, int size, int[] pivots, int pivotStart, double tiny,
+                         boolean parallel) {
         int perturbed = 0;
         for (int panelStart = 0; panelStart < width; panelStart += PANEL) {
             int k0 = panelStart;
             int k1 = Math.min(k0 + PANEL, width);
-            perturbed += factorPanel(f, k0, k1, width, pivots, tiny);
+            perturbed += factorPanel(f, k0, k1, width, pivots, pivotStart, tiny);
             int p = k1 - k0;
             long boundaryWork = (long) (size - width) * p * p / 2;
             DenseFrontKernels.forRows(width, size, parallel && boundaryWork > PARALLEL_WORK, false,
@@ -64,7 +65,8 @@ final class LuFrontKernels {
     }
 
     /** Step 1: columns [k0, k1) on the candidate rows k0 … width−1, pivoting among them. */
-    private static int factorPanel(double[][] f, int k0, int k1, int width, int[] pivots, double tiny) {
+    private static int factorPanel(double[][] f, int k0, int k1, int width, int[] pivots, int pivotStart,
+                                   double tiny) {
         int perturbed = 0;
         for (int c = k0; c < k1; c++) {
             int best = c;
@@ -76,7 +78,7 @@ final class LuFrontKernels {
                     best = r;
                 }
             }
-            pivots[c] = best;
+            pivots[pivotStart + c] = best;
             if (best != c) {
                 double[] swap = f[c];
                 f[c] = f[best];

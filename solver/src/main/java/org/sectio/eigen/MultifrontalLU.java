@@ -35,21 +35,21 @@ public final class MultifrontalLU {
 
     private final MultifrontalAnalysis analysis;
     private final DMatrixSparseCSC matrix;
-    private final LuFront[] fronts;
+    private final LuFactor factor;
     private final int perturbed;
     private final boolean parallel;
     private final int[] firstDescendant;
 
-    private MultifrontalLU(MultifrontalAnalysis analysis, DMatrixSparseCSC matrix, LuFront[] fronts, int perturbed,
+    private MultifrontalLU(MultifrontalAnalysis analysis, DMatrixSparseCSC matrix, LuFactor factor, int perturbed,
                            boolean parallel) {
         this.analysis = analysis;
         this.matrix = matrix;
-        this.fronts = fronts;
+        this.factor = factor;
         this.perturbed = perturbed;
         this.parallel = parallel;
         DissectionTree tree = analysis.tree();
-        this.firstDescendant = new int[fronts.length];
-        for (int v = 0; v < fronts.length; v++) {
+        this.firstDescendant = new int[tree.nodeCount()];
+        for (int v = 0; v < firstDescendant.length; v++) {
             int first = tree.firstChild()[v];
             firstDescendant[v] = first >= 0 ? firstDescendant[first] : v;
         }
@@ -136,7 +136,7 @@ public final class MultifrontalLU {
         }
         LuElimination.Result r = LuElimination.eliminate(symbolic, a.nz_values, analysis.transposeIndex(),
                 STATIC_PIVOT * largest, threads);
-        return new MultifrontalLU(symbolic, a, r.fronts(), r.perturbedPivots(), threads > 1);
+        return new MultifrontalLU(symbolic, a, r.factor(), r.perturbedPivots(), threads > 1);
     }
 
     /** @return the order n */
@@ -151,11 +151,7 @@ public final class MultifrontalLU {
 
     /** @return stored entries of L and U */
     public long factorNonZeros() {
-        long count = 0;
-        for (LuFront front : fronts) {
-            count += front.entries();
-        }
-        return count;
+        return factor.entries();
     }
 
     /**
@@ -193,7 +189,7 @@ public final class MultifrontalLU {
         for (int p = 0; p < n; p++) {
             work[p] = rightHandSide[perm[p]];
         }
-        int root = fronts.length - 1;
+        int root = analysis.tree().root();
         forwardSweep(root, 0, work);
         backwardSweep(root, 0, work);
         for (int p = 0; p < n; p++) {
@@ -221,7 +217,7 @@ public final class MultifrontalLU {
         double[] scratch = new double[analysis.largestFront()];
         if (!splits(v, depth)) {
             for (int u = firstDescendant[v]; u <= v; u++) {
-                LuFrontSubstitution.forward(fronts[u], work, scratch);
+                LuFrontSubstitution.forward(factor, u, work, scratch);
             }
             return;
         }
@@ -235,7 +231,7 @@ public final class MultifrontalLU {
         for (int q : analysis.boundary(second)) {
             work[q] += privateWork[q];
         }
-        LuFrontSubstitution.forward(fronts[v], work, scratch);
+        LuFrontSubstitution.forward(factor, v, work, scratch);
     }
 
     /** Backward substitution over the subtree of v, starting with v. */
@@ -244,11 +240,11 @@ public final class MultifrontalLU {
         double[] gathered = new double[analysis.largestFront()];
         if (!splits(v, depth)) {
             for (int u = v; u >= firstDescendant[v]; u--) {
-                LuFrontSubstitution.backward(fronts[u], work, scratch, gathered);
+                LuFrontSubstitution.backward(factor, u, work, scratch, gathered);
             }
             return;
         }
-        LuFrontSubstitution.backward(fronts[v], work, scratch, gathered);
+        LuFrontSubstitution.backward(factor, v, work, scratch, gathered);
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
         runBoth(() -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
