@@ -69,7 +69,7 @@ public final class HybridModeBenchmark {
         TensorGrid sweepGrid = TensorGrid.fitted(guide.bounds(), sweepCells);
         System.out.printf(Locale.ROOT, "band sweep 8 ... 16 GHz, %d points, %d x %d cells, 8 modes%n", points,
                 sweepGrid.cellsX(), sweepGrid.cellsY());
-        System.out.println("reuse  assembly_s  solves_s  total_s  per_point_s  curves");
+        System.out.println("reuse  assembly_s  solves_s  total_s  per_point_s  operator_solves  curves");
         double[] totals = new double[2];
         for (int pass = 0; pass < 2; pass++) {
             boolean reuse = pass == 0;
@@ -77,8 +77,10 @@ public final class HybridModeBenchmark {
             HybridSweep.Result r = HybridSweep.run(() -> HybridModeSolver.prepare(guide, sweepGrid), band, 8, reuse,
                     SolveProgress.SILENT);
             totals[pass] = r.assemblySeconds() + r.solveSeconds();
-            System.out.printf(Locale.ROOT, "%-5s %11.2f %9.2f %8.2f %12.3f %7d%n", reuse ? "yes" : "no",
-                    r.assemblySeconds(), r.solveSeconds(), totals[pass], totals[pass] / points, r.curves().size());
+            int solves = r.sets().stream().mapToInt(HybridModeSet::operatorApplications).sum();
+            System.out.printf(Locale.ROOT, "%-5s %11.2f %9.2f %8.2f %12.3f %16d %7d%n", reuse ? "yes" : "no",
+                    r.assemblySeconds(), r.solveSeconds(), totals[pass], totals[pass] / points, solves,
+                    r.curves().size());
         }
         System.out.printf(Locale.ROOT, "speed-up of reuse: %.2f%n", totals[1] / totals[0]);
     }

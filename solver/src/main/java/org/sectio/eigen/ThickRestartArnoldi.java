@@ -20,7 +20,10 @@ import org.apache.commons.math3.linear.RealMatrix;
  *
  * <p>Vectors are orthogonalized by classical Gram–Schmidt twice (J. W. Daniel, W. B. Gragg, L. Kaufman
  * and G. W. Stewart, Math. Comp. 30 (1976) 772–795). A pair is accepted when its residual estimate
- * |h eₘᵀ y| is at most {@code relativeTolerance · |θ|} (ARPACK's criterion). A single start vector sees
+ * |h eₘᵀ y| is at most {@code relativeTolerance · |θ|} (ARPACK's criterion); the test runs at the end of
+ * every cycle and, from a basis of 2·count + 2 vectors on, after every step, so a start vector that
+ * already lies near the wanted subspace (the eigenvectors of a nearby frequency) ends the iteration
+ * early. A single start vector sees
  * a second copy of an exactly double eigenvalue only through rounding, as in any single-vector Krylov
  * method; callers that need multiplets must restart from other vectors.
  */
@@ -56,6 +59,7 @@ public final class ThickRestartArnoldi {
         v[0] = startVector(n, starts, random);
         int k = 0;
         int applications = 0;
+        int earliest = Math.min(m, 2 * count + 2);
         for (int restart = 0; ; restart++) {
             for (int j = k; j < m; j++) {
                 double[] w = new double[n];
@@ -72,38 +76,26 @@ public final class ThickRestartArnoldi {
                 }
                 h[j + 1][j] = norm;
                 v[j + 1] = w;
-            }
-            RealMatrix hm = new Array2DRowRealMatrix(m, m);
-            for (int r = 0; r < m; r++) {
-                for (int c = 0; c < m; c++) {
-                    hm.setEntry(r, c, h[r][c]);
+                int size = j + 1;
+                if (size >= earliest && size < m) {
+                    Ritz early = ritz(h, size, count, relativeTolerance);
+                    if (early.converged()) {
+                        return ritzPairs(v, size, early, applications, restart);
+                    }
                 }
             }
-            EigenDecomposition eig = new EigenDecomposition(hm);
-            double[] re = eig.getRealEigenvalues();
-            double[] im = eig.getImagEigenvalues();
-            RealMatrix blocks = eig.getV();
-            List<int[]> order = blocksByMagnitude(re, im);
-            double last = h[m][m - 1];
-            List<int[]> wanted = take(order, count);
-            boolean converged = true;
-            double worst = 0;
-            for (int[] b : wanted) {
-                double estimate = residualEstimate(blocks, b, m, last) / Math.hypot(re[b[0]], im[b[0]]);
-                worst = Math.max(worst, estimate);
-                converged &= estimate <= relativeTolerance;
-            }
-            if (converged) {
-                return ritzPairs(v, m, blocks, wanted, re, im, last, applications, restart);
+            Ritz ritz = ritz(h, m, count, relativeTolerance);
+            if (ritz.converged()) {
+                return ritzPairs(v, m, ritz, applications, restart);
             }
             if (restart >= maxRestarts) {
                 throw new EigenSolverException(String.format(java.util.Locale.ROOT, "Arnoldi: %d pairs did not converge"
                         + " in %d restarts (%d operator applications); largest residual estimate %.3g, tolerance %.3g;"
                         + " try a larger basis or a shift closer to the wanted eigenvalues", count, restart, applications,
-                        worst, relativeTolerance), 0, restart, relativeTolerance, 0);
+                        ritz.worst(), relativeTolerance), 0, restart, relativeTolerance, 0);
             }
             int keep = Math.min(m - 2, count + (m - count) / 2);
-            double[][] q = orthonormalColumns(blocks, take(order, keep), m);
+            double[][] q = orthonormalColumns(ritz.blocks(), take(ritz.order(), keep), m);
             k = q.length;
             double[][] newV = new double[m + 1][];
             for (int c = 0; c < k; c++) {
@@ -125,11 +117,44 @@ public final class ThickRestartArnoldi {
                     }
                     newH[a][b] = s;
                 }
-                newH[k][a] = last * q[a][m - 1];
+                newH[k][a] = ritz.last() * q[a][m - 1];
             }
             v = newV;
             h = newH;
         }
+    }
+
+    /** The Ritz values and block eigenvectors of the leading p × p part of H, and whether the wanted ones converged. */
+    private record Ritz(double[] re, double[] im, RealMatrix blocks, List<int[]> order, List<int[]> wanted, double last,
+                        boolean converged, double worst) {
+    }
+
+    /**
+     * The Ritz pairs of {@code OP V_p = V_p H_p + h[p][p−1] v_p e_pᵀ} (valid after every expansion step,
+     * also after a restart, since row p of H then holds only h[p][p−1]).
+     */
+    private static Ritz ritz(double[][] h, int p, int count, double relativeTolerance) {
+        RealMatrix hm = new Array2DRowRealMatrix(p, p);
+        for (int r = 0; r < p; r++) {
+            for (int c = 0; c < p; c++) {
+                hm.setEntry(r, c, h[r][c]);
+            }
+        }
+        EigenDecomposition eig = new EigenDecomposition(hm);
+        double[] re = eig.getRealEigenvalues();
+        double[] im = eig.getImagEigenvalues();
+        RealMatrix blocks = eig.getV();
+        List<int[]> order = blocksByMagnitude(re, im);
+        double last = h[p][p - 1];
+        List<int[]> wanted = take(order, count);
+        boolean converged = true;
+        double worst = 0;
+        for (int[] b : wanted) {
+            double estimate = residualEstimate(blocks, b, p, last) / Math.hypot(re[b[0]], im[b[0]]);
+            worst = Math.max(worst, estimate);
+            converged &= estimate <= relativeTolerance;
+        }
+        return new Ritz(re, im, blocks, order, wanted, last, converged, worst);
     }
 
     private static double[] startVector(int n, double[][] starts, Random random) {
@@ -283,8 +308,12 @@ public final class ThickRestartArnoldi {
         return out.toArray(new double[0][]);
     }
 
-    private static ArnoldiPairs ritzPairs(double[][] v, int m, RealMatrix blocks, List<int[]> wanted, double[] re,
-                                          double[] im, double last, int applications, int restarts) {
+    private static ArnoldiPairs ritzPairs(double[][] v, int m, Ritz ritz, int applications, int restarts) {
+        RealMatrix blocks = ritz.blocks();
+        List<int[]> wanted = ritz.wanted();
+        double[] re = ritz.re();
+        double[] im = ritz.im();
+        double last = ritz.last();
         int n = v[0].length;
         int total = 0;
         for (int[] b : wanted) {
