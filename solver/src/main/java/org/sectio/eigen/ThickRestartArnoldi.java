@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Random;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.EigenDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 
 /**
@@ -14,8 +12,8 @@ import org.apache.commons.math3.linear.RealMatrix;
  * Arnoldi method with thick restarts in the form of G. W. Stewart's Krylov–Schur method, "A Krylov–Schur
  * algorithm for large eigenproblems", SIAM J. Matrix Anal. Appl. 23(3) (2001) 601–614: after m steps
  * {@code OP V = V H + v h eₘᵀ}; the k wanted (largest |θ|) Ritz values of H span an invariant subspace
- * with an orthonormal basis Q (here from the real block eigenvectors of H, Commons Math's
- * EigenDecomposition, orthonormalized), and {@code OP (VQ) = (VQ)(QᵀHQ) + v (h eₘᵀQ)} is again a
+ * with an orthonormal basis Q (here from the real block eigenvectors of H, {@link SmallEigen},
+ * orthonormalized), and {@code OP (VQ) = (VQ)(QᵀHQ) + v (h eₘᵀQ)} is again a
  * Krylov decomposition from which the iteration continues. Complex pairs are kept together.
  *
  * <p>Vectors are orthogonalized by classical Gram–Schmidt twice (J. W. Daniel, W. B. Gragg, L. Kaufman
@@ -78,8 +76,8 @@ public final class ThickRestartArnoldi {
                 v[j + 1] = w;
                 int size = j + 1;
                 if (size >= earliest && size < m) {
-                    Ritz early = ritz(h, size, count, relativeTolerance);
-                    if (early.converged()) {
+                    Ritz early = earlyRitz(h, size, count, relativeTolerance);
+                    if (early != null && early.converged()) {
                         return ritzPairs(v, size, early, applications, restart);
                     }
                 }
@@ -134,16 +132,10 @@ public final class ThickRestartArnoldi {
      * also after a restart, since row p of H then holds only h[p][p−1]).
      */
     private static Ritz ritz(double[][] h, int p, int count, double relativeTolerance) {
-        RealMatrix hm = new Array2DRowRealMatrix(p, p);
-        for (int r = 0; r < p; r++) {
-            for (int c = 0; c < p; c++) {
-                hm.setEntry(r, c, h[r][c]);
-            }
-        }
-        EigenDecomposition eig = new EigenDecomposition(hm);
-        double[] re = eig.getRealEigenvalues();
-        double[] im = eig.getImagEigenvalues();
-        RealMatrix blocks = eig.getV();
+        SmallEigen.Result eig = SmallEigen.of(h, p);
+        double[] re = eig.re();
+        double[] im = eig.im();
+        RealMatrix blocks = eig.blocks();
         List<int[]> order = blocksByMagnitude(re, im);
         double last = h[p][p - 1];
         List<int[]> wanted = take(order, count);
@@ -155,6 +147,15 @@ public final class ThickRestartArnoldi {
             converged &= estimate <= relativeTolerance;
         }
         return new Ritz(re, im, blocks, order, wanted, last, converged, worst);
+    }
+
+    /** {@link #ritz}, or null where the small eigenproblem fails; the iteration then goes on to the full basis. */
+    private static Ritz earlyRitz(double[][] h, int p, int count, double relativeTolerance) {
+        try {
+            return ritz(h, p, count, relativeTolerance);
+        } catch (EigenSolverException e) {
+            return null;
+        }
     }
 
     private static double[] startVector(int n, double[][] starts, Random random) {

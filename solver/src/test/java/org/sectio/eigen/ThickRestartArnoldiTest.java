@@ -63,4 +63,41 @@ class ThickRestartArnoldiTest {
         assertEquals(-pairs.valueImaginary()[0], pairs.valueImaginary()[1], 1e-9, "a conjugate pair");
         assertTrue(pairs.count() >= 4, Arrays.toString(pairs.valueReal()));
     }
+
+    /**
+     * S D S⁻¹ with D = diag(1/(1+i)²) and S unit upper bidiagonal with 0.5 above the diagonal: a
+     * non-normal map with the well separated spectrum of a shift-invert operator, eigenvalues exactly
+     * 1/(1+i)².
+     */
+    private static LinearMap similarToDiagonal() {
+        return (x, y) -> {
+            int n = x.length;
+            double[] z = new double[n];
+            for (int i = n - 1; i >= 0; i--) {
+                z[i] = x[i] - (i + 1 < n ? 0.5 * z[i + 1] : 0);
+            }
+            for (int i = 0; i < n; i++) {
+                z[i] /= (1.0 + i) * (1.0 + i);
+            }
+            for (int i = 0; i < n; i++) {
+                y[i] = z[i] + (i + 1 < n ? 0.5 * z[i + 1] : 0);
+            }
+        };
+    }
+
+    @Test
+    void aStartNearTheWantedEigenvectorsEndsBeforeTheBasisIsFull() {
+        int n = 200;
+        ArnoldiPairs cold = ThickRestartArnoldi.largest(similarToDiagonal(), n, 4, 24, 1e-10, 200, new double[0][], 1);
+        ArnoldiPairs warm = ThickRestartArnoldi.largest(similarToDiagonal(), n, 4, 24, 1e-10, 200, cold.vectorReal(), 1);
+        for (int k = 0; k < 4; k++) {
+            double exact = 1.0 / ((1.0 + k) * (1.0 + k));
+            assertEquals(exact, cold.valueReal()[k], 1e-9 * exact, "cold value " + k);
+            assertEquals(exact, warm.valueReal()[k], 1e-9 * exact, "warm value " + k);
+        }
+        // convergence is tested after every step from 2·4 + 2 = 10 vectors on; measured: cold 16, warm 13
+        // applications, both before the basis of 24 is full
+        assertTrue(cold.applications() < 24 && warm.applications() < cold.applications(),
+                "applications cold " + cold.applications() + ", warm " + warm.applications());
+    }
 }
