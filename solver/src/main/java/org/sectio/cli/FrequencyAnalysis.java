@@ -44,6 +44,28 @@ final class FrequencyAnalysis {
     }
 
     /**
+     * Why a sweep has no loss to chart: no mode propagates anywhere in it, or the modes that do have no
+     * computed loss (their rows' notes say why).
+     *
+     * @param report a sweep report
+     * @return the reason, a phrase without a full stop
+     */
+    static String noLossReason(FrequencyReport report) {
+        List<String> propagating = new ArrayList<>();
+        for (int k = 0; k < report.identities().size(); k++) {
+            for (List<ModeAtFrequency> row : report.figures()) {
+                if (row.get(k).propagating()) {
+                    propagating.add(report.identities().get(k).label());
+                    break;
+                }
+            }
+        }
+        return propagating.isEmpty() ? "no mode propagates in the band"
+                : "no loss is computed for the propagating modes (" + String.join(", ", propagating)
+                        + "; see the notes under the table)";
+    }
+
+    /**
      * @param report a sweep report
      * @return β and α_c + α_d of every mode over the sweep (NaN where cut off or unavailable), for the charts
      */

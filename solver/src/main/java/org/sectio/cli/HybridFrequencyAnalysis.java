@@ -26,8 +26,8 @@ import org.sectio.physics.ModeAtFrequency;
  * solve, the modes are tracked over the band ({@link HybridSweep}), and each tracked curve is joined
  * to the scalar mode of the cutoff table whose longitudinal field (Hz for TE, Ez for TM) it overlaps
  * most, ∫ ψ_s u dA / (‖ψ_s‖ ‖u‖) with u the curve's Hz or Ez, taken at the frequency where the overlap
- * is largest. So each row of the table keeps its cutoff and its identity and gains β(f), vg, α_d and
- * the power figures of {@link HybridFigures}.
+ * is largest. So each row of the table keeps its cutoff and its identity and gains β(f), vg, α_d, the
+ * wall loss α_c, the impedances and the power figures of {@link HybridFigures}.
  */
 final class HybridFrequencyAnalysis {
 
@@ -82,7 +82,8 @@ final class HybridFrequencyAnalysis {
                             Locale.ROOT, "not among the %d hybrid modes of largest beta² computed here; ask for more"
                                     + " modes (-n)", wanted)));
                 } else {
-                    row.add(HybridFigures.at(hybrid, label, frequenciesHz[i], mode.cutoffFrequencyHz(), settings));
+                    row.add(HybridFigures.at(section, hybrid, label, frequenciesHz[i], mode.cutoffFrequencyHz(),
+                            settings));
                 }
             }
             out.add(row);
@@ -160,15 +161,24 @@ final class HybridFrequencyAnalysis {
             }
         }
         FieldMap te = modes.get(0).field();
-        return new TensorGrid(lines(te.xCoordinates(), section.bounds().minX()),
-                lines(te.yCoordinates(), section.bounds().minY()));
+        return new TensorGrid(lines(te.xCoordinates(), section.bounds().minX(), section.bounds().maxX()),
+                lines(te.yCoordinates(), section.bounds().minY(), section.bounds().maxY()));
     }
 
-    private static double[] lines(double[] centres, double first) {
+    /**
+     * The lines around the given centres from the first; the last, rebuilt through every centre, can fall
+     * short of the bounding box by round-off (then the grid would not cover the section), so a last
+     * line within 1e-9 of the span of the box's far side is put on it.
+     */
+    private static double[] lines(double[] centres, double first, double last) {
         double[] out = new double[centres.length + 1];
         out[0] = first;
         for (int k = 0; k < centres.length; k++) {
             out[k + 1] = 2 * centres[k] - out[k];
+        }
+        int end = out.length - 1;
+        if (Math.abs(out[end] - last) <= 1e-9 * (last - first)) {
+            out[end] = last;
         }
         return out;
     }

@@ -197,7 +197,7 @@ final class SolveCommand implements Callable<Integer> {
             spec.commandLine().getErr().flush();
         }
         if (plots != null && SweepCharts.write(FrequencyAnalysis.sweep(report), plots).size() < 2) {
-            spec.commandLine().getErr().println("sectio: no mode propagates in the band: "
+            spec.commandLine().getErr().println("sectio: " + FrequencyAnalysis.noLossReason(report) + ": "
                     + SweepCharts.ATTENUATION_FILE + " not written");
         }
     }

@@ -50,13 +50,15 @@ public final class SweepCharts {
     /**
      * @param sweep the figures
      * @return α_c + α_d against f
-     * @throws IllegalArgumentException if no mode has a finite loss in the sweep
+     * @throws IllegalArgumentException if no mode has a finite loss in the sweep (none propagates, or
+     *     their loss is not computed)
      */
     public static LineChart attenuation(BandSweep sweep) {
         List<ChartSeries> series = curves(sweep, gigahertz(sweep), ModeCurve::attenuationDbPerMetre);
         if (series.isEmpty()) {
-            throw new IllegalArgumentException("no mode of " + sweep.sectionName() + " propagates in the sweep:"
-                    + " nothing to draw in the attenuation chart");
+            throw new IllegalArgumentException("no mode of " + sweep.sectionName() + " has a finite loss in the"
+                    + " sweep (none propagates, or their loss is not computed): nothing to draw in the attenuation"
+                    + " chart");
         }
         return new LineChart("Attenuation of " + sweep.sectionName(), FREQUENCY_TITLE,
                 "attenuation α_c + α_d (dB/m)", series, span(sweep));
@@ -64,7 +66,8 @@ public final class SweepCharts {
 
     /**
      * Writes both charts into a folder, each file atomically; the attenuation chart only when some
-     * mode has a finite loss in the sweep (none does when every mode is cut off throughout).
+     * mode has a finite loss in the sweep (none does when every mode is cut off throughout, or when the
+     * loss of the propagating modes is not computed).
      *
      * @param sweep the figures
      * @param folder an existing, writable folder

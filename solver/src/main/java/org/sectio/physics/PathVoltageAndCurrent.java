@@ -27,9 +27,9 @@ import org.sectio.physics.PotentialSamples.Constraint;
  */
 record PathVoltageAndCurrent(double voltage, double current) {
 
-    private static final double[] NODES = {-0.8611363115940526, -0.3399810435848563, 0.3399810435848563,
+    static final double[] NODES = {-0.8611363115940526, -0.3399810435848563, 0.3399810435848563,
         0.8611363115940526};
-    private static final double[] WEIGHTS = {0.3478548451374538, 0.6521451548625461, 0.6521451548625461,
+    static final double[] WEIGHTS = {0.3478548451374538, 0.6521451548625461, 0.6521451548625461,
         0.3478548451374538};
 
     /**
@@ -70,13 +70,29 @@ record PathVoltageAndCurrent(double voltage, double current) {
     }
 
     private static double current(ModeFamily family, ModeFieldIntegrals integrals, VoltagePath path) {
-        WallPoints walls = integrals.walls();
+        double[] tangential = integrals.wallTangential();
+        double[] normal = integrals.wallNormal();
+        double[] density = new double[tangential.length];
+        for (int p = 0; p < density.length; p++) {
+            density[p] = density(family, tangential[p], normal[p]);
+        }
+        return wallCurrent(integrals.walls(), density, path);
+    }
+
+    /**
+     * The current of the conductor nearest the path's end that flows the same way as at the end (see the
+     * type description): I = s ∮ max(0, s J_z) dℓ, s = sign J_z at the wall point nearest the end.
+     *
+     * @param walls the wall quadrature points
+     * @param density J_z at every wall point (real), A/m or the geometric units of the caller
+     * @param path the voltage path
+     * @return I in the units of density times metres
+     */
+    static double wallCurrent(WallPoints walls, double[] density, VoltagePath path) {
         double[] x = walls.x();
         double[] y = walls.y();
         double[] dl = walls.length();
         int[] owner = walls.conductor();
-        double[] tangential = integrals.wallTangential();
-        double[] normal = integrals.wallNormal();
         int nearest = 0;
         double closest = Double.POSITIVE_INFINITY;
         for (int p = 0; p < walls.size(); p++) {
@@ -86,12 +102,11 @@ record PathVoltageAndCurrent(double voltage, double current) {
                 nearest = p;
             }
         }
-        double end = density(family, tangential[nearest], normal[nearest]);
-        double sign = end < 0 ? -1 : 1;
+        double sign = density[nearest] < 0 ? -1 : 1;
         double sum = 0;
         for (int p = 0; p < walls.size(); p++) {
             if (owner[p] == owner[nearest]) {
-                sum += Math.max(0, sign * density(family, tangential[p], normal[p])) * dl[p];
+                sum += Math.max(0, sign * density[p]) * dl[p];
             }
         }
         return sign * sum;

@@ -25,7 +25,8 @@ import org.sectio.modes.ModeFamily;
  * quadrature points of the same conductor within R as exact rows of the least-squares system
  * (TE: ∂ψ/∂n_q = 0; TM and TEM: ψ(q) = ψ(p)), so the fit follows a curved wall; only samples on the
  * inward side (r ≥ −h/4) are used, so that metal thinner than the fit radius does not couple fields
- * across it. A quadratic fit of a smooth ψ leaves O(h³) in ψ and O(h²) in ∇ψ. Measured (tests in
+ * across it ({@link Constraint#ONE_SIDED} keeps that inward filter with no condition and no wall rows, for a
+ * field component with no boundary condition of its own). A quadratic fit of a smooth ψ leaves O(h³) in ψ and O(h²) in ∇ψ. Measured (tests in
  * {@code org.sectio.physics.ModeAnalysis*Test}): TE wall values and tangential derivatives converge at
  * order 2 (α_c of WR-90 TE10, circular TE11 and TE01), the TEM normal derivative at order 2 (coaxial
  * α_c); the TM normal derivative only at order 1 on curved walls (circular TM01: 5.5e-3, 3.2e-3, 1.6e-3
@@ -59,7 +60,12 @@ final class PotentialSamples {
         /** ψ = 0 at the point (TM wall). */
         ZERO_VALUE,
         /** ψ takes one unknown value along the conductor (TEM wall). */
-        CONSTANT_ON_WALL
+        CONSTANT_ON_WALL,
+        /**
+         * No condition, but only samples on the inward side are used: a wall point for a component with no
+         * boundary condition of its own (the transverse H of a hybrid mode).
+         */
+        ONE_SIDED
     }
 
     private final double[] xs;
@@ -68,6 +74,7 @@ final class PotentialSamples {
     private final double[] weights;
     private final boolean[] usable;
     private final ModeFamily family;
+    private final String what;
 
     private WallPoints walls;
     private final NormalEquations system = new NormalEquations();
@@ -94,6 +101,7 @@ final class PotentialSamples {
                     + " field-based quantities need a mode from ModeSolver");
         }
         family = mode.family();
+        what = family.name();
         xs = map.xCoordinates();
         ys = map.yCoordinates();
         values = map.values();
@@ -108,6 +116,36 @@ final class PotentialSamples {
     }
 
     /**
+     * One real field component on a tensor set of points (a part of a hybrid mode's field), with no mass
+     * weights: {@link #massNorm()} is then 0 and {@link #family()} null. Usable are the finite samples
+     * inside the guide that {@code keep} accepts.
+     *
+     * @param section the cross-section the field was solved on
+     * @param what the component's name for messages, e.g. "Re Hx"
+     * @param xCoordinates sample abscissae, m, ascending
+     * @param yCoordinates sample ordinates, m, ascending
+     * @param samples the values, row-major ({@code samples[j * x.length + i]}), NaN where there is none;
+     *     shared, not copied
+     * @param keep which sample points (x, y) may be used, e.g. those in one material
+     */
+    PotentialSamples(CrossSection section, String what, double[] xCoordinates, double[] yCoordinates,
+                     double[] samples, java.util.function.BiPredicate<Double, Double> keep) {
+        family = null;
+        this.what = what;
+        xs = xCoordinates;
+        ys = yCoordinates;
+        values = samples;
+        weights = new double[values.length];
+        usable = new boolean[values.length];
+        for (int j = 0; j < ys.length; j++) {
+            for (int i = 0; i < xs.length; i++) {
+                int k = j * xs.length + i;
+                usable[k] = Double.isFinite(values[k]) && section.contains(xs[i], ys[j]) && keep.test(xs[i], ys[j]);
+            }
+        }
+    }
+
+    /**
      * Lets wall fits use the boundary condition at the neighbouring wall points as well.
      *
      * @param points the wall quadrature points of the cross-section
@@ -116,7 +154,7 @@ final class PotentialSamples {
         walls = points;
     }
 
-    /** @return the family of the mode */
+    /** @return the family of the mode (null for a component of a hybrid field) */
     ModeFamily family() {
         return family;
     }
@@ -199,7 +237,7 @@ final class PotentialSamples {
         }
         throw new IllegalStateException(String.format(java.util.Locale.ROOT,
                 "the field samples near (%.6g, %.6g) m are too few or aligned to rebuild the %s field there even"
-                        + " with a linear fit over %.3g grid steps; use a finer grid", x, y, family,
+                        + " with a linear fit over %.3g grid steps; use a finer grid", x, y, what,
                 LINEAR_RADII[LINEAR_RADII.length - 1]));
     }
 
@@ -225,7 +263,7 @@ final class PotentialSamples {
         if (accumulate(x, y, tx, ty, nx, ny, h, radius, wall, count) < minSamples) {
             return false;
         }
-        if (conductor >= 0 && walls != null) {
+        if (conductor >= 0 && walls != null && constraint != Constraint.ONE_SIDED) {
             accumulateWall(x, y, tx, ty, nx, ny, h, radius, constraint, count, conductor);
         }
         if (!system.solve()) {
