@@ -98,7 +98,7 @@ public final class ThickRestartArnoldi {
             double[][] newV = new double[m + 1][];
             for (int c = 0; c < k; c++) {
                 double[] x = new double[n];
-                addCombination(v, m, q[c], x);
+                BasisKernels.addCombination(v, m, q[c], x);
                 newV[c] = x;
             }
             newV[k] = v[m];
@@ -184,7 +184,7 @@ public final class ThickRestartArnoldi {
     private static double orthogonalize(double[][] v, int count, double[] w, double[][] h, int column) {
         double[] c = new double[count];
         for (int pass = 0; pass < 2; pass++) {
-            projections(v, count, w, c);
+            BasisKernels.projections(v, count, w, c);
             double[] negated = new double[count];
             for (int i = 0; i < count; i++) {
                 negated[i] = -c[i];
@@ -192,49 +192,9 @@ public final class ThickRestartArnoldi {
                     h[i][column] += c[i];
                 }
             }
-            addCombination(v, count, negated, w);
+            BasisKernels.addCombination(v, count, negated, w);
         }
         return Math.sqrt(dot(w, w));
-    }
-
-    /** {@code c[i] = v[i]·w} for i &lt; count, four basis vectors per pass over w. */
-    private static void projections(double[][] v, int count, double[] w, double[] c) {
-        int n = w.length;
-        int i = 0;
-        for (; i + 3 < count; i += 4) {
-            double[] v0 = v[i], v1 = v[i + 1], v2 = v[i + 2], v3 = v[i + 3];
-            double s0 = 0, s1 = 0, s2 = 0, s3 = 0;
-            for (int k = 0; k < n; k++) {
-                double x = w[k];
-                s0 += v0[k] * x;
-                s1 += v1[k] * x;
-                s2 += v2[k] * x;
-                s3 += v3[k] * x;
-            }
-            c[i] = s0;
-            c[i + 1] = s1;
-            c[i + 2] = s2;
-            c[i + 3] = s3;
-        }
-        for (; i < count; i++) {
-            c[i] = dot(v[i], w);
-        }
-    }
-
-    /** {@code x += Σ_{i < count} c[i] v[i]}, four basis vectors per pass. */
-    private static void addCombination(double[][] v, int count, double[] c, double[] x) {
-        int n = x.length;
-        int i = 0;
-        for (; i + 3 < count; i += 4) {
-            double[] v0 = v[i], v1 = v[i + 1], v2 = v[i + 2], v3 = v[i + 3];
-            double c0 = c[i], c1 = c[i + 1], c2 = c[i + 2], c3 = c[i + 3];
-            for (int k = 0; k < n; k++) {
-                x[k] += c0 * v0[k] + c1 * v1[k] + c2 * v2[k] + c3 * v3[k];
-            }
-        }
-        for (; i < count; i++) {
-            axpy(c[i], v[i], x);
-        }
     }
 
     private static double columnNorm(double[][] h, int column) {
@@ -329,9 +289,9 @@ public final class ThickRestartArnoldi {
         for (int[] b : wanted) {
             double[] real = new double[n];
             double[] imag = new double[n];
-            addCombination(v, m, blocks.getColumn(b[0]), real);
+            BasisKernels.addCombination(v, m, blocks.getColumn(b[0]), real);
             if (b.length == 2) {
-                addCombination(v, m, blocks.getColumn(b[1]), imag);
+                BasisKernels.addCombination(v, m, blocks.getColumn(b[1]), imag);
             }
             double norm = Math.sqrt(dot(real, real) + dot(imag, imag));
             scale(real, 1.0 / norm);
