@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.stream.IntStream;
 import org.ejml.data.DMatrixSparseCSC;
 import org.sectio.eigen.ArnoldiPairs;
 import org.sectio.eigen.ComplexInverseIteration;
@@ -178,8 +179,10 @@ public final class HybridModeSolver {
             }
             DMatrixSparseCSC aRe = operator(k0, false);
             DMatrixSparseCSC aIm = pencil.lossy() ? operator(k0, true) : null;
-            List<HybridMode> modes = new ArrayList<>();
-            for (int p = 0; p < pairs.count(); p++) {
+            int found = pairs.count();
+            double[][] values = new double[found][];
+            double[][][] vectors = new double[found][][];
+            for (int p = 0; p < found; p++) {
                 double tr = pairs.valueReal()[p];
                 double ti = pairs.valueImaginary()[p];
                 double t2 = tr * tr + ti * ti;
@@ -200,8 +203,13 @@ public final class HybridModeSolver {
                     xr = c.vectorReal();
                     xi = c.vectorImaginary();
                 }
-                modes.add(mode(k0, lr, li, xr, xi, aRe, aIm));
+                values[p] = new double[] {lr, li};
+                vectors[p] = new double[][] {xr, xi};
             }
+            IntStream indices = IntStream.range(0, found);
+            List<HybridMode> modes = new ArrayList<>((threads > 1 ? indices.parallel() : indices)
+                    .mapToObj(p -> mode(k0, values[p][0], values[p][1], vectors[p][0], vectors[p][1], aRe, aIm))
+                    .toList());
             modes.sort(Comparator.comparingDouble(HybridMode::betaSquaredReal).reversed());
             List<HybridMode> numbered = new ArrayList<>();
             for (int k = 0; k < modes.size(); k++) {
