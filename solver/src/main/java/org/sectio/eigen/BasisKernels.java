@@ -1,8 +1,5 @@
 package org.sectio.eigen;
 
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
-
 /**
  * The two vector kernels of Gram–Schmidt against a Krylov basis, {@code c = Vᵀw} and
  * {@code x += V c}, four basis vectors per pass over memory. Every vector is cut at the same point
@@ -82,19 +79,6 @@ final class BasisKernels {
     }
 
     private static void runHalves(int n, Runnable low, Runnable high) {
-        if (n < PARALLEL_LENGTH || ForkJoinPool.getCommonPoolParallelism() < 2 && Runtime.getRuntime()
-                .availableProcessors() < 2) {
-            low.run();
-            high.run();
-            return;
-        }
-        ForkJoinTask<?> task = ForkJoinTask.adapt(high);
-        if (ForkJoinTask.inForkJoinPool()) {
-            task.fork();
-        } else {
-            ForkJoinPool.commonPool().execute(task);
-        }
-        low.run();
-        task.join();
+        TaskPair.run(n >= PARALLEL_LENGTH && Runtime.getRuntime().availableProcessors() > 1, low, high);
     }
 }

@@ -52,4 +52,19 @@ record DissectionTree(int[] permutation, int[] columnStart, int[] columnEnd, int
     int width(int v) {
         return columnEnd[v] - columnStart[v];
     }
+
+    /**
+     * Whether a solve sweeps the two subtrees of v independently: within the top two levels, and
+     * only where both hold at least 10 000 unknowns (the tree alone decides, never the thread count).
+     */
+    boolean sweptApart(int v, int depth) {
+        int first = firstChild[v];
+        int second = secondChild[v];
+        return depth < 2 && first >= 0 && second >= 0 && subtreeSize(first) >= 10_000 && subtreeSize(second) >= 10_000;
+    }
+
+    /** @return the unknowns in the subtree of v */
+    int subtreeSize(int v) {
+        return columnEnd[v] - subtreeStart[v];
+    }
 }

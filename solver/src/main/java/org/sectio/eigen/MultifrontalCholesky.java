@@ -1,7 +1,5 @@
 package org.sectio.eigen;
 
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
 import org.ejml.data.DMatrixSparseCSC;
 
 /**
@@ -13,7 +11,7 @@ import org.ejml.data.DMatrixSparseCSC;
  *
  * <p>A solve is a forward sweep up the tree ({@code L11 y = b}, then {@code b_boundary −= L21 y}
  * per front) and a backward sweep down it ({@code y −= L21ᵀ x_boundary}, then {@code L11ᵀ x = y}).
- * At the top {@link #SPLIT_DEPTH} levels of the tree the two subtrees are swept independently: in
+ * At the top two levels of the tree ({@link DissectionTree#sweptApart}) the two subtrees are swept independently: in
  * the forward sweep the second subtree accumulates its contributions to ancestor rows in a private
  * vector that is added afterwards. Where to split depends on the tree only, so the result is the
  * same whether the subtrees run one after the other ({@code threads = 1} at factor time) or
@@ -27,10 +25,6 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
     private final boolean parallel;
     private final int[] firstDescendant;
 
-    /** Tree levels whose sibling subtrees are swept independently. */
-    private static final int SPLIT_DEPTH = 2;
-    /** Smallest subtree (unknowns) on either side of a split. */
-    private static final int SPLIT_MINIMUM = 10_000;
 
     MultifrontalCholesky(MultifrontalAnalysis analysis, FrontFactor[] fronts, int threads) {
         this.analysis = analysis;
@@ -93,11 +87,11 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int[] perm = analysis.tree().permutation();
         double[] work = new double[n];
         int half = n / 2;
-        runBoth(() -> gather(rightHandSide, perm, work, 0, half), () -> gather(rightHandSide, perm, work, half, n));
+        TaskPair.run(parallel, () -> gather(rightHandSide, perm, work, 0, half), () -> gather(rightHandSide, perm, work, half, n));
         int root = fronts.length - 1;
         forwardSweep(root, 0, work, 1);
         backwardSweep(root, 0, work, 1);
-        runBoth(() -> scatter(work, perm, solution, 0, half), () -> scatter(work, perm, solution, half, n));
+        TaskPair.run(parallel, () -> scatter(work, perm, solution, 0, half), () -> scatter(work, perm, solution, half, n));
     }
 
     /**
@@ -136,11 +130,11 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int[] perm = analysis.tree().permutation();
         double[] work = new double[n * k];
         int half = n / 2;
-        runBoth(() -> gather(rightHandSides, perm, work, 0, half), () -> gather(rightHandSides, perm, work, half, n));
+        TaskPair.run(parallel, () -> gather(rightHandSides, perm, work, 0, half), () -> gather(rightHandSides, perm, work, half, n));
         int root = fronts.length - 1;
         forwardSweep(root, 0, work, k);
         backwardSweep(root, 0, work, k);
-        runBoth(() -> scatter(work, perm, solutions, 0, half), () -> scatter(work, perm, solutions, half, n));
+        TaskPair.run(parallel, () -> scatter(work, perm, solutions, 0, half), () -> scatter(work, perm, solutions, half, n));
     }
 
     private static void gather(double[] source, int[] perm, double[] target, int from, int to) {
@@ -175,16 +169,6 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         }
     }
 
-    private boolean splits(int v, int depth) {
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        return depth < SPLIT_DEPTH && second >= 0 && subtreeSize(first) >= SPLIT_MINIMUM
-                && subtreeSize(second) >= SPLIT_MINIMUM;
-    }
-
-    private int subtreeSize(int v) {
-        return analysis.tree().columnEnd()[v] - analysis.tree().subtreeStart()[v];
-    }
 
     /** Forward step of front {@code u} on {@code k} interleaved vectors. */
     private void forward(int u, double[] work, double[] scratch, int k) {
@@ -206,7 +190,7 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
 
     /** Forward substitution over the subtree of {@code v} (post-order), ending with {@code v} itself. */
     private void forwardSweep(int v, int depth, double[] work, int k) {
-        if (!splits(v, depth)) {
+        if (!analysis.tree().sweptApart(v, depth)) {
             double[] scratch = new double[analysis.largestFront() * k];
             for (int u = firstDescendant[v]; u <= v; u++) {
                 forward(u, work, scratch, k);
@@ -218,7 +202,7 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int lo = tree.subtreeStart()[second] * k, hi = tree.columnEnd()[second] * k;
         double[] privateWork = new double[work.length];
         System.arraycopy(work, lo, privateWork, lo, hi - lo);
-        runBoth(() -> forwardSweep(first, depth + 1, work, k), () -> forwardSweep(second, depth + 1, privateWork, k));
+        TaskPair.run(parallel, () -> forwardSweep(first, depth + 1, work, k), () -> forwardSweep(second, depth + 1, privateWork, k));
         System.arraycopy(privateWork, lo, work, lo, hi - lo);
         for (int q : analysis.boundary(second)) {
             for (int j = q * k; j < q * k + k; j++) {
@@ -230,7 +214,7 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
 
     /** Backward substitution over the subtree of {@code v}, starting with {@code v} itself. */
     private void backwardSweep(int v, int depth, double[] work, int k) {
-        if (!splits(v, depth)) {
+        if (!analysis.tree().sweptApart(v, depth)) {
             double[] scratch = new double[analysis.largestFront() * k];
             for (int u = v; u >= firstDescendant[v]; u--) {
                 backward(u, work, scratch, k);
@@ -240,22 +224,6 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         backward(v, work, new double[analysis.largestFront() * k], k);
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        runBoth(() -> backwardSweep(first, depth + 1, work, k), () -> backwardSweep(second, depth + 1, work, k));
-    }
-
-    private void runBoth(Runnable first, Runnable second) {
-        if (!parallel) {
-            first.run();
-            second.run();
-            return;
-        }
-        ForkJoinTask<?> task = ForkJoinTask.adapt(second);
-        if (ForkJoinTask.inForkJoinPool()) {
-            task.fork();
-        } else {
-            ForkJoinPool.commonPool().execute(task);
-        }
-        first.run();
-        task.join();
+        TaskPair.run(parallel, () -> backwardSweep(first, depth + 1, work, k), () -> backwardSweep(second, depth + 1, work, k));
     }
 }

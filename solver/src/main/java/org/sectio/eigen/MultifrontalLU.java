@@ -1,8 +1,6 @@
 package org.sectio.eigen;
 
 import java.util.Arrays;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
 import org.ejml.data.DMatrixSparseCSC;
 
 /**
@@ -28,10 +26,6 @@ public final class MultifrontalLU {
     /** Relative size of a static pivot. */
     static final double STATIC_PIVOT = 1e-10;
     private static final int REFINEMENT_STEPS = 3;
-    /** Tree levels whose sibling subtrees are swept independently in a solve. */
-    private static final int SPLIT_DEPTH = 2;
-    /** Smallest subtree (unknowns) on either side of a split. */
-    private static final int SPLIT_MINIMUM = 10_000;
 
     private final MultifrontalAnalysis analysis;
     private final DMatrixSparseCSC matrix;
@@ -197,16 +191,6 @@ public final class MultifrontalLU {
         }
     }
 
-    private boolean splits(int v, int depth) {
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        return depth < SPLIT_DEPTH && second >= 0 && subtreeSize(first) >= SPLIT_MINIMUM
-                && subtreeSize(second) >= SPLIT_MINIMUM;
-    }
-
-    private int subtreeSize(int v) {
-        return analysis.tree().columnEnd()[v] - analysis.tree().subtreeStart()[v];
-    }
 
     /**
      * Forward substitution over the subtree of v, ending with v. At a split the second subtree
@@ -215,7 +199,7 @@ public final class MultifrontalLU {
      */
     private void forwardSweep(int v, int depth, double[] work) {
         double[] scratch = new double[analysis.largestFront()];
-        if (!splits(v, depth)) {
+        if (!analysis.tree().sweptApart(v, depth)) {
             for (int u = firstDescendant[v]; u <= v; u++) {
                 LuFrontSubstitution.forward(factor, u, work, scratch);
             }
@@ -226,7 +210,7 @@ public final class MultifrontalLU {
         int lo = tree.subtreeStart()[second], hi = tree.columnEnd()[second];
         double[] privateWork = new double[work.length];
         System.arraycopy(work, lo, privateWork, lo, hi - lo);
-        runBoth(() -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
+        TaskPair.run(parallel, () -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
         System.arraycopy(privateWork, lo, work, lo, hi - lo);
         for (int q : analysis.boundary(second)) {
             work[q] += privateWork[q];
@@ -238,7 +222,7 @@ public final class MultifrontalLU {
     private void backwardSweep(int v, int depth, double[] work) {
         double[] scratch = new double[analysis.largestFront()];
         double[] gathered = new double[analysis.largestFront()];
-        if (!splits(v, depth)) {
+        if (!analysis.tree().sweptApart(v, depth)) {
             for (int u = v; u >= firstDescendant[v]; u--) {
                 LuFrontSubstitution.backward(factor, u, work, scratch, gathered);
             }
@@ -247,22 +231,6 @@ public final class MultifrontalLU {
         LuFrontSubstitution.backward(factor, v, work, scratch, gathered);
         DissectionTree tree = analysis.tree();
         int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        runBoth(() -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
-    }
-
-    private void runBoth(Runnable first, Runnable second) {
-        if (!parallel) {
-            first.run();
-            second.run();
-            return;
-        }
-        ForkJoinTask<?> task = ForkJoinTask.adapt(second);
-        if (ForkJoinTask.inForkJoinPool()) {
-            task.fork();
-        } else {
-            ForkJoinPool.commonPool().execute(task);
-        }
-        first.run();
-        task.join();
+        TaskPair.run(parallel, () -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
     }
 }
