@@ -19,8 +19,7 @@ final class LuFactor {
     /** Largest segment; a few big arrays live in the old generation and are never copied by the collector. */
     private static final int SEGMENT_CAPACITY = 1 << 27;
 
-    private final int[] start;
-    private final int[] width;
+    private final DissectionTree tree;
     private final int[] boundaryStart;
     private final int[] boundaryRows;
     private final int[] segment;
@@ -30,10 +29,8 @@ final class LuFactor {
     private final long entries;
 
     LuFactor(MultifrontalAnalysis analysis) {
-        DissectionTree tree = analysis.tree();
+        tree = analysis.tree();
         int nodes = tree.nodeCount();
-        start = new int[nodes];
-        width = new int[nodes];
         boundaryStart = new int[nodes + 1];
         segment = new int[nodes];
         offset = new int[nodes];
@@ -46,12 +43,10 @@ final class LuFactor {
         int current = 0;
         long total = 0;
         for (int v = 0; v < nodes; v++) {
-            start[v] = tree.columnStart()[v];
-            width[v] = tree.width(v);
             int[] rows = analysis.boundary(v);
             System.arraycopy(rows, 0, boundaryRows, boundaryStart[v], rows.length);
             boundaryStart[v + 1] = boundaryStart[v] + rows.length;
-            long w = width[v];
+            long w = tree.width(v);
             long size = w * w + 2 * w * rows.length;
             if (size > Integer.MAX_VALUE - 16) {
                 throw new IllegalArgumentException("multifrontal LU: front " + v + " needs " + size
@@ -74,11 +69,11 @@ final class LuFactor {
     }
 
     int start(int v) {
-        return start[v];
+        return tree.columnStart()[v];
     }
 
     int width(int v) {
-        return width[v];
+        return tree.width(v);
     }
 
     int boundaryStart(int v) {

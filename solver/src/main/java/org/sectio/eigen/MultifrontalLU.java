@@ -67,10 +67,6 @@ public final class MultifrontalLU {
          * @throws IllegalArgumentException as {@link MultifrontalAnalysis#analyse}, or if rows are not sorted
          */
         public static Analysis of(DMatrixSparseCSC pattern, int[] column, int[] row) {
-            return of(pattern, column, row, NestedDissection.DEFAULT_LEAF_SIZE);
-        }
-
-        static Analysis of(DMatrixSparseCSC pattern, int[] column, int[] row, int leafSize) {
             int n = pattern.numCols;
             for (int c = 0; c < n; c++) {
                 for (int idx = pattern.col_idx[c] + 1; idx < pattern.col_idx[c + 1]; idx++) {
@@ -80,7 +76,7 @@ public final class MultifrontalLU {
                     }
                 }
             }
-            MultifrontalAnalysis symbolic = MultifrontalAnalysis.analyse(pattern, column, row, leafSize);
+            MultifrontalAnalysis symbolic = MultifrontalAnalysis.analyse(pattern, column, row);
             int[] next = Arrays.copyOf(pattern.col_idx, n);
             int[] transpose = new int[pattern.nz_length];
             for (int c = 0; c < n; c++) {
