@@ -2,8 +2,6 @@ package org.sectio.eigen;
 
 import java.util.Arrays;
 import java.util.concurrent.ConcurrentLinkedDeque;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
 
 /**
  * Numeric phase of the multifrontal Cholesky factorization (Duff and Reid, "The multifrontal
@@ -11,20 +9,15 @@ import java.util.concurrent.ForkJoinTask;
  * Review 34 (1992) 82–109). The dissection tree is walked in post-order; at each node the front is
  * assembled from the matrix entries of its columns plus the extend-add of the children's update
  * matrices, its columns are eliminated by {@link DenseFrontKernels}, the factor columns are stored
- * and the update matrix is handed to the parent. The two subtrees of a node run as fork-join tasks
- * down to {@link #FORK_DEPTH}; the parent always adds its children in the same order, so results
- * are identical for every thread count.
+ * and the update matrix is handed to the parent. The walk, with sibling subtrees as fork-join tasks
+ * and children added in a fixed order, is {@link SubtreeWalk}, so results are identical for every
+ * thread count.
  *
  * <p>Fronts are assembled in reusable dense workspaces (one per front in progress, pooled) and
  * each update matrix is handed up as a packed lower triangle, so the only allocations are the
  * stored factor and the update matrices.
  */
 final class FrontalElimination {
-
-    /** Deepest tree level at which sibling subtrees are forked. */
-    private static final int FORK_DEPTH = 12;
-    /** Smallest subtree (in unknowns) worth a task of its own. */
-    private static final int FORK_MINIMUM = 4096;
 
     private final MultifrontalAnalysis analysis;
     private final DissectionTree tree;
@@ -54,40 +47,14 @@ final class FrontalElimination {
     /** Factors the matrix whose entries are {@code values} (in the analysed pattern) and returns one factor per front. */
     static FrontFactor[] eliminate(MultifrontalAnalysis analysis, double[] values, int threads) {
         FrontalElimination run = new FrontalElimination(analysis, values, threads > 1);
-        int root = analysis.tree().root();
-        if (threads == 1) {
-            run.eliminate(root, 0);
-        } else {
-            ForkJoinPool pool = new ForkJoinPool(threads);
-            try {
-                pool.invoke(ForkJoinTask.adapt(() -> run.eliminate(root, 0)));
-            } finally {
-                pool.shutdown();
-            }
-        }
+        SubtreeWalk.run(analysis.tree(), threads, run::eliminateNode);
         return run.factors;
     }
 
-    /** Eliminates the subtree of {@code v}; returns its update matrix, packed lower triangle by rows. */
-    private double[] eliminate(int v, int depth) {
+    /** Eliminates node {@code v} from its children's updates; returns its update matrix, packed lower triangle by rows. */
+    private double[] eliminateNode(int v, double[] firstUpdate, double[] secondUpdate) {
         int first = tree.firstChild()[v];
         int second = tree.secondChild()[v];
-        double[] firstUpdate = null;
-        double[] secondUpdate = null;
-        if (parallel && second >= 0 && depth < FORK_DEPTH && subtreeSize(first) >= FORK_MINIMUM
-                && subtreeSize(second) >= FORK_MINIMUM) {
-            ForkJoinTask<double[]> secondTask = ForkJoinTask.adapt(() -> eliminate(second, depth + 1));
-            secondTask.fork();
-            firstUpdate = eliminate(first, depth + 1);
-            secondUpdate = secondTask.join();
-        } else {
-            if (first >= 0) {
-                firstUpdate = eliminate(first, depth + 1);
-            }
-            if (second >= 0) {
-                secondUpdate = eliminate(second, depth + 1);
-            }
-        }
         int start = tree.columnStart()[v];
         int width = tree.width(v);
         int[] boundary = analysis.boundary(v);
@@ -126,10 +93,6 @@ final class FrontalElimination {
             workspace = new Workspace(front, new double[DenseFrontKernels.PANEL][largest]);
         }
         return workspace;
-    }
-
-    private int subtreeSize(int v) {
-        return v < 0 ? 0 : tree.columnEnd()[v] - tree.subtreeStart()[v];
     }
 
     private void assemble(int v, double[][] front) {

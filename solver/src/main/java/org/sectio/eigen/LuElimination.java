@@ -2,23 +2,17 @@ package org.sectio.eigen;
 
 import java.util.Arrays;
 import java.util.concurrent.ConcurrentLinkedDeque;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.ForkJoinTask;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * Numeric phase of the multifrontal LU (Duff and Reid, SIAM J. Sci. Stat. Comput. 5 (1984)
  * 633–641): the dissection tree is walked in post-order; each front is assembled from both triangles
  * of its columns and rows plus the extend-add of its children's update matrices, partly factored by
- * {@link LuFrontKernels}, and its factor stored in the {@link LuFactor}. As in the Cholesky's
- * {@link FrontalElimination}, the two subtrees of a node run as fork-join tasks down to
- * {@link #FORK_DEPTH} and the parent adds its children in a fixed order, so the factor is the same
- * for every thread count.
+ * {@link LuFrontKernels}, and its factor stored in the {@link LuFactor}. The walk, with sibling
+ * subtrees as fork-join tasks, is {@link SubtreeWalk}, as for the Cholesky's {@link FrontalElimination},
+ * so the factor is the same for every thread count.
  */
 final class LuElimination {
-
-    private static final int FORK_DEPTH = 12;
-    private static final int FORK_MINIMUM = 4096;
 
     private final MultifrontalAnalysis analysis;
     private final DissectionTree tree;
@@ -54,40 +48,14 @@ final class LuElimination {
     static Result eliminate(MultifrontalAnalysis analysis, double[] values, int[] transpose, double tiny,
                             int threads) {
         LuElimination run = new LuElimination(analysis, values, transpose, tiny, threads > 1);
-        int root = analysis.tree().root();
-        if (threads == 1) {
-            run.eliminate(root, 0);
-        } else {
-            ForkJoinPool pool = new ForkJoinPool(threads);
-            try {
-                pool.invoke(ForkJoinTask.adapt(() -> run.eliminate(root, 0)));
-            } finally {
-                pool.shutdown();
-            }
-        }
+        SubtreeWalk.run(analysis.tree(), threads, run::eliminateNode);
         return new Result(run.factor, run.perturbed.get());
     }
 
-    /** Eliminates the subtree of v; returns its b × b update matrix, row-major. */
-    private double[] eliminate(int v, int depth) {
+    /** Eliminates node v from its children's updates; returns its b × b update matrix, row-major. */
+    private double[] eliminateNode(int v, double[] firstUpdate, double[] secondUpdate) {
         int first = tree.firstChild()[v];
         int second = tree.secondChild()[v];
-        double[] firstUpdate = null;
-        double[] secondUpdate = null;
-        if (parallel && second >= 0 && depth < FORK_DEPTH && subtreeSize(first) >= FORK_MINIMUM
-                && subtreeSize(second) >= FORK_MINIMUM) {
-            ForkJoinTask<double[]> secondTask = ForkJoinTask.adapt(() -> eliminate(second, depth + 1));
-            secondTask.fork();
-            firstUpdate = eliminate(first, depth + 1);
-            secondUpdate = secondTask.join();
-        } else {
-            if (first >= 0) {
-                firstUpdate = eliminate(first, depth + 1);
-            }
-            if (second >= 0) {
-                secondUpdate = eliminate(second, depth + 1);
-            }
-        }
         int start = tree.columnStart()[v];
         int w = tree.width(v);
         int[] boundary = analysis.boundary(v);
@@ -134,10 +102,6 @@ final class LuElimination {
             f = new double[largest][largest];
         }
         return f;
-    }
-
-    private int subtreeSize(int v) {
-        return v < 0 ? 0 : tree.columnEnd()[v] - tree.subtreeStart()[v];
     }
 
     /** Adds the front's matrix entries: the analysis maps the lower triangle, the transpose index the upper. */
