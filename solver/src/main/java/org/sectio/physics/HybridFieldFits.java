@@ -135,30 +135,18 @@ final class HybridFieldFits {
         double length = path.length();
         double ux = (path.x2() - path.x1()) / length;
         double uy = (path.y2() - path.y1()) / length;
-        double re = 0;
-        double im = 0;
+        double[] sum = new double[2];
         List<Double> breaks = interfaces(path, ux, uy);
         for (int piece = 0; piece + 1 < breaks.size(); piece++) {
-            double s = breaks.get(piece);
-            double stop = breaks.get(piece + 1);
-            while (s < stop) {
-                double h = hzRe.localStep(path.x1() + s * ux, path.y1() + s * uy);
-                double next = Math.min(stop, s + h);
-                if (stop - next < 0.2 * h) {
-                    next = stop;
-                }
-                double mid = 0.5 * (s + next);
-                double half = 0.5 * (next - s);
-                for (int g = 0; g < PathVoltageAndCurrent.NODES.length; g++) {
-                    double at = mid + half * PathVoltageAndCurrent.NODES[g];
-                    double[] e = electricField(path.x1() + at * ux, path.y1() + at * uy);
-                    double w = PathVoltageAndCurrent.WEIGHTS[g] * half;
-                    re -= (e[0] * ux + e[2] * uy) * w;
-                    im -= (e[1] * ux + e[3] * uy) * w;
-                }
-                s = next;
-            }
+            PathVoltageAndCurrent.quadrature(path, breaks.get(piece), breaks.get(piece + 1), hzRe::localStep,
+                    (x, y, weight) -> {
+                        double[] e = electricField(x, y);
+                        sum[0] -= (e[0] * ux + e[2] * uy) * weight;
+                        sum[1] -= (e[1] * ux + e[3] * uy) * weight;
+                    });
         }
+        double re = sum[0];
+        double im = sum[1];
         return new double[] {re, im};
     }
 

@@ -1,5 +1,6 @@
 package org.sectio.physics;
 
+import java.util.function.DoubleBinaryOperator;
 import org.sectio.geometry.CrossSection;
 import org.sectio.modes.ModeFamily;
 import org.sectio.physics.PotentialSamples.Constraint;
@@ -27,9 +28,9 @@ import org.sectio.physics.PotentialSamples.Constraint;
  */
 record PathVoltageAndCurrent(double voltage, double current) {
 
-    static final double[] NODES = {-0.8611363115940526, -0.3399810435848563, 0.3399810435848563,
+    private static final double[] NODES = {-0.8611363115940526, -0.3399810435848563, 0.3399810435848563,
         0.8611363115940526};
-    static final double[] WEIGHTS = {0.3478548451374538, 0.6521451548625461, 0.6521451548625461,
+    private static final double[] WEIGHTS = {0.3478548451374538, 0.6521451548625461, 0.6521451548625461,
         0.3478548451374538};
 
     /**
@@ -43,30 +44,51 @@ record PathVoltageAndCurrent(double voltage, double current) {
                                     VoltagePath path) {
         path.requireInside(section);
         ModeFamily family = samples.family();
-        double length = path.length();
-        double dx = (path.x2() - path.x1()) / length;
-        double dy = (path.y2() - path.y1()) / length;
-        double voltage = 0;
-        double s = 0;
-        while (s < length) {
-            double h = samples.localStep(path.x1() + s * dx, path.y1() + s * dy);
-            double next = Math.min(length, s + h);
-            if (length - next < 0.2 * h) {
-                next = length;
+        double dx = (path.x2() - path.x1()) / path.length();
+        double dy = (path.y2() - path.y1()) / path.length();
+        double[] sum = new double[1];
+        quadrature(path, 0, path.length(), samples::localStep, (x, y, weight) -> {
+            samples.fit(x, y, 1, 0, Constraint.NONE);
+            double integrand = family == ModeFamily.TE
+                    ? samples.gradientY * dx - samples.gradientX * dy
+                    : samples.gradientX * dx + samples.gradientY * dy;
+            sum[0] += integrand * weight;
+        });
+        double voltage = sum[0];
+        return new PathVoltageAndCurrent(voltage, current(family, integrals, path));
+    }
+
+    /** A quadrature point on a path: its position (m) and weight (m). */
+    @FunctionalInterface
+    interface PathPoint {
+        void add(double x, double y, double weight);
+    }
+
+    /**
+     * Four-point Gauss–Legendre quadrature over the arc length [from, to] of the path, in steps of the
+     * local grid spacing (a last step shorter than a fifth of it is merged into the one before).
+     *
+     * @param localStep the grid spacing at a point, m
+     * @param point receives every quadrature point
+     */
+    static void quadrature(VoltagePath path, double from, double to, DoubleBinaryOperator localStep, PathPoint point) {
+        double ux = (path.x2() - path.x1()) / path.length();
+        double uy = (path.y2() - path.y1()) / path.length();
+        double s = from;
+        while (s < to) {
+            double h = localStep.applyAsDouble(path.x1() + s * ux, path.y1() + s * uy);
+            double next = Math.min(to, s + h);
+            if (to - next < 0.2 * h) {
+                next = to;
             }
             double mid = 0.5 * (s + next);
             double half = 0.5 * (next - s);
             for (int g = 0; g < NODES.length; g++) {
                 double at = mid + half * NODES[g];
-                samples.fit(path.x1() + at * dx, path.y1() + at * dy, 1, 0, Constraint.NONE);
-                double integrand = family == ModeFamily.TE
-                        ? samples.gradientY * dx - samples.gradientX * dy
-                        : samples.gradientX * dx + samples.gradientY * dy;
-                voltage += integrand * WEIGHTS[g] * half;
+                point.add(path.x1() + at * ux, path.y1() + at * uy, WEIGHTS[g] * half);
             }
             s = next;
         }
-        return new PathVoltageAndCurrent(voltage, current(family, integrals, path));
     }
 
     private static double current(ModeFamily family, ModeFieldIntegrals integrals, VoltagePath path) {
