@@ -11,11 +11,8 @@ import org.ejml.data.DMatrixSparseCSC;
  *
  * <p>A solve is a forward sweep up the tree ({@code L11 y = b}, then {@code b_boundary −= L21 y}
  * per front) and a backward sweep down it ({@code y −= L21ᵀ x_boundary}, then {@code L11ᵀ x = y}).
- * At the top two levels of the tree ({@link DissectionTree#sweptApart}) the two subtrees are swept independently: in
- * the forward sweep the second subtree accumulates its contributions to ancestor rows in a private
- * vector that is added afterwards. Where to split depends on the tree only, so the result is the
- * same whether the subtrees run one after the other ({@code threads = 1} at factor time) or
- * concurrently on the common fork-join pool.
+ * The sweeps, with the top levels' subtrees swept apart on two cores when {@code threads > 1} at
+ * factor time, are {@link SplitSweeps}; the result does not depend on the thread count.
  */
 public final class MultifrontalCholesky implements SymmetricFactorization {
 
@@ -23,19 +20,13 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
     private final FrontFactor[] fronts;
     private final long nonZeros;
     private final boolean parallel;
-    private final int[] firstDescendant;
-
+    private final SplitSweeps sweeps;
 
     MultifrontalCholesky(MultifrontalAnalysis analysis, FrontFactor[] fronts, int threads) {
         this.analysis = analysis;
         this.fronts = fronts;
         this.parallel = threads > 1;
-        DissectionTree tree = analysis.tree();
-        this.firstDescendant = new int[fronts.length];
-        for (int v = 0; v < fronts.length; v++) {
-            int first = tree.firstChild()[v];
-            firstDescendant[v] = first >= 0 ? firstDescendant[first] : v;
-        }
+        this.sweeps = new SplitSweeps(analysis, parallel);
         long count = 0;
         for (FrontFactor front : fronts) {
             count += front.nonZeros();
@@ -87,11 +78,11 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int[] perm = analysis.tree().permutation();
         double[] work = new double[n];
         int half = n / 2;
-        TaskPair.run(parallel, () -> gather(rightHandSide, perm, work, 0, half), () -> gather(rightHandSide, perm, work, half, n));
-        int root = fronts.length - 1;
-        forwardSweep(root, 0, work, 1);
-        backwardSweep(root, 0, work, 1);
-        TaskPair.run(parallel, () -> scatter(work, perm, solution, 0, half), () -> scatter(work, perm, solution, half, n));
+        TaskPair.run(parallel, () -> gather(rightHandSide, perm, work, 0, half),
+                () -> gather(rightHandSide, perm, work, half, n));
+        sweep(work, 1);
+        TaskPair.run(parallel, () -> scatter(work, perm, solution, 0, half),
+                () -> scatter(work, perm, solution, half, n));
     }
 
     /**
@@ -130,11 +121,11 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         int[] perm = analysis.tree().permutation();
         double[] work = new double[n * k];
         int half = n / 2;
-        TaskPair.run(parallel, () -> gather(rightHandSides, perm, work, 0, half), () -> gather(rightHandSides, perm, work, half, n));
-        int root = fronts.length - 1;
-        forwardSweep(root, 0, work, k);
-        backwardSweep(root, 0, work, k);
-        TaskPair.run(parallel, () -> scatter(work, perm, solutions, 0, half), () -> scatter(work, perm, solutions, half, n));
+        TaskPair.run(parallel, () -> gather(rightHandSides, perm, work, 0, half),
+                () -> gather(rightHandSides, perm, work, half, n));
+        sweep(work, k);
+        TaskPair.run(parallel, () -> scatter(work, perm, solutions, 0, half),
+                () -> scatter(work, perm, solutions, half, n));
     }
 
     private static void gather(double[] source, int[] perm, double[] target, int from, int to) {
@@ -169,7 +160,6 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         }
     }
 
-
     /** Forward step of front {@code u} on {@code k} interleaved vectors. */
     private void forward(int u, double[] work, double[] scratch, int k) {
         if (k == 1) {
@@ -188,42 +178,9 @@ public final class MultifrontalCholesky implements SymmetricFactorization {
         }
     }
 
-    /** Forward substitution over the subtree of {@code v} (post-order), ending with {@code v} itself. */
-    private void forwardSweep(int v, int depth, double[] work, int k) {
-        if (!analysis.tree().sweptApart(v, depth)) {
-            double[] scratch = new double[analysis.largestFront() * k];
-            for (int u = firstDescendant[v]; u <= v; u++) {
-                forward(u, work, scratch, k);
-            }
-            return;
-        }
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        int lo = tree.subtreeStart()[second] * k, hi = tree.columnEnd()[second] * k;
-        double[] privateWork = new double[work.length];
-        System.arraycopy(work, lo, privateWork, lo, hi - lo);
-        TaskPair.run(parallel, () -> forwardSweep(first, depth + 1, work, k), () -> forwardSweep(second, depth + 1, privateWork, k));
-        System.arraycopy(privateWork, lo, work, lo, hi - lo);
-        for (int q : analysis.boundary(second)) {
-            for (int j = q * k; j < q * k + k; j++) {
-                work[j] += privateWork[j];
-            }
-        }
-        forward(v, work, new double[analysis.largestFront() * k], k);
-    }
-
-    /** Backward substitution over the subtree of {@code v}, starting with {@code v} itself. */
-    private void backwardSweep(int v, int depth, double[] work, int k) {
-        if (!analysis.tree().sweptApart(v, depth)) {
-            double[] scratch = new double[analysis.largestFront() * k];
-            for (int u = v; u >= firstDescendant[v]; u--) {
-                backward(u, work, scratch, k);
-            }
-            return;
-        }
-        backward(v, work, new double[analysis.largestFront() * k], k);
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        TaskPair.run(parallel, () -> backwardSweep(first, depth + 1, work, k), () -> backwardSweep(second, depth + 1, work, k));
+    /** Both sweeps on k interleaved vectors. */
+    private void sweep(double[] work, int k) {
+        sweeps.forward(work, k, (u, w, scratch, more) -> forward(u, w, scratch, k));
+        sweeps.backward(work, k, (u, w, scratch, more) -> backward(u, w, scratch, k));
     }
 }

@@ -31,8 +31,7 @@ public final class MultifrontalLU {
     private final DMatrixSparseCSC matrix;
     private final LuFactor factor;
     private final int perturbed;
-    private final boolean parallel;
-    private final int[] firstDescendant;
+    private final SplitSweeps sweeps;
 
     private MultifrontalLU(MultifrontalAnalysis analysis, DMatrixSparseCSC matrix, LuFactor factor, int perturbed,
                            boolean parallel) {
@@ -40,13 +39,7 @@ public final class MultifrontalLU {
         this.matrix = matrix;
         this.factor = factor;
         this.perturbed = perturbed;
-        this.parallel = parallel;
-        DissectionTree tree = analysis.tree();
-        this.firstDescendant = new int[tree.nodeCount()];
-        for (int v = 0; v < firstDescendant.length; v++) {
-            int first = tree.firstChild()[v];
-            firstDescendant[v] = first >= 0 ? firstDescendant[first] : v;
-        }
+        this.sweeps = new SplitSweeps(analysis, parallel);
     }
 
     /**
@@ -179,54 +172,10 @@ public final class MultifrontalLU {
         for (int p = 0; p < n; p++) {
             work[p] = rightHandSide[perm[p]];
         }
-        int root = analysis.tree().root();
-        forwardSweep(root, 0, work);
-        backwardSweep(root, 0, work);
+        sweeps.forward(work, 1, (v, w, scratch, more) -> LuFrontSubstitution.forward(factor, v, w, scratch));
+        sweeps.backward(work, 1, (v, w, scratch, more) -> LuFrontSubstitution.backward(factor, v, w, scratch, more));
         for (int p = 0; p < n; p++) {
             solution[perm[p]] = work[p];
         }
-    }
-
-
-    /**
-     * Forward substitution over the subtree of v, ending with v. At a split the second subtree
-     * accumulates its updates of ancestor rows in a private vector added afterwards (as in
-     * {@link MultifrontalCholesky}); where to split depends on the tree only.
-     */
-    private void forwardSweep(int v, int depth, double[] work) {
-        double[] scratch = new double[analysis.largestFront()];
-        if (!analysis.tree().sweptApart(v, depth)) {
-            for (int u = firstDescendant[v]; u <= v; u++) {
-                LuFrontSubstitution.forward(factor, u, work, scratch);
-            }
-            return;
-        }
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        int lo = tree.subtreeStart()[second], hi = tree.columnEnd()[second];
-        double[] privateWork = new double[work.length];
-        System.arraycopy(work, lo, privateWork, lo, hi - lo);
-        TaskPair.run(parallel, () -> forwardSweep(first, depth + 1, work), () -> forwardSweep(second, depth + 1, privateWork));
-        System.arraycopy(privateWork, lo, work, lo, hi - lo);
-        for (int q : analysis.boundary(second)) {
-            work[q] += privateWork[q];
-        }
-        LuFrontSubstitution.forward(factor, v, work, scratch);
-    }
-
-    /** Backward substitution over the subtree of v, starting with v. */
-    private void backwardSweep(int v, int depth, double[] work) {
-        double[] scratch = new double[analysis.largestFront()];
-        double[] gathered = new double[analysis.largestFront()];
-        if (!analysis.tree().sweptApart(v, depth)) {
-            for (int u = v; u >= firstDescendant[v]; u--) {
-                LuFrontSubstitution.backward(factor, u, work, scratch, gathered);
-            }
-            return;
-        }
-        LuFrontSubstitution.backward(factor, v, work, scratch, gathered);
-        DissectionTree tree = analysis.tree();
-        int first = tree.firstChild()[v], second = tree.secondChild()[v];
-        TaskPair.run(parallel, () -> backwardSweep(first, depth + 1, work), () -> backwardSweep(second, depth + 1, work));
     }
 }
